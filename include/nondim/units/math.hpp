@@ -1,0 +1,150 @@
+#pragma once
+/// \file math.hpp
+/// \brief Functions of quantities: powers and roots with exact rational dimensions;
+/// transcendental functions only of dimensionless values.
+
+#include <cmath>
+#include <limits>
+#include <type_traits>
+
+#include "quantity_type.hpp"
+
+namespace nondim {
+
+namespace detail {
+
+/// x^n by squaring (exact in the same cases as repeated multiplication).
+template <class R>
+constexpr R ipow(R x, std::int64_t n) noexcept {
+  const bool inv = n < 0;
+  std::uint64_t m = inv ? 0 - static_cast<std::uint64_t>(n) : static_cast<std::uint64_t>(n);
+  R r = 1;
+  while (m != 0) {
+    if ((m & 1U) != 0) r *= x;
+    x *= x;
+    m >>= 1U;
+  }
+  return inv ? R{1} / r : r;
+}
+
+/// m-th root by Newton's method, for constant evaluation where <cmath> is not constexpr.
+template <class R>
+constexpr R const_root(R x, std::int64_t m) noexcept {
+  if (x != x || x == R{0} || x == std::numeric_limits<R>::infinity()) return x;
+  if (x < R{0}) {
+    if (m % 2 == 1) return -const_root(-x, m);
+    return std::numeric_limits<R>::quiet_NaN();
+  }
+  R y = x > R{1} ? x : R{1};
+  for (int i = 0; i < 2000; ++i) {
+    const R next = ((static_cast<R>(m) - 1) * y + x / ipow(y, m - 1)) / static_cast<R>(m);
+    if (next >= y) break;  // monotone from above: stop when it stops falling
+    y = next;
+  }
+  return y;
+}
+
+template <class R>
+constexpr R root(R x, std::int64_t m) noexcept {
+  if (std::is_constant_evaluated()) return const_root(x, m);
+  if (m == 2) return std::sqrt(x);
+  if (m == 3) return std::cbrt(x);
+  if (x < R{0} && m % 2 == 1) return -std::pow(-x, R{1} / static_cast<R>(m));
+  return std::pow(x, R{1} / static_cast<R>(m));
+}
+
+}  // namespace detail
+
+/// \brief q^(N/M), the dimension raised exactly: `pow<1, 2>(area)` is a length.
+template <std::int64_t N, std::int64_t M = 1, dimension D, class R>
+constexpr quantity<pow(D, rational{N, M}), R> pow(const quantity<D, R>& q) noexcept {
+  constexpr rational p{N, M};
+  const R base = p.den == 1 ? q.si() : detail::root(q.si(), p.den);
+  return quantity<pow(D, p), R>::from_si(detail::ipow(base, p.num));
+}
+template <dimension D, class R>
+constexpr auto sqrt(const quantity<D, R>& q) noexcept {
+  return pow<1, 2>(q);
+}
+template <dimension D, class R>
+constexpr auto cbrt(const quantity<D, R>& q) noexcept {
+  return pow<1, 3>(q);
+}
+
+template <dimension D, class R>
+constexpr quantity<D, R> abs(const quantity<D, R>& q) noexcept {
+  return quantity<D, R>::from_si(q.si() < R{0} ? -q.si() : q.si());
+}
+template <dimension D, class R>
+constexpr quantity<D, R> min(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  return b < a ? b : a;
+}
+template <dimension D, class R>
+constexpr quantity<D, R> max(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  return a < b ? b : a;
+}
+template <dimension D, class R>
+constexpr quantity<D, R> hypot(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  if (std::is_constant_evaluated()) return quantity<D, R>::from_si(detail::const_root(a.si() * a.si() + b.si() * b.si(), 2));
+  return quantity<D, R>::from_si(std::hypot(a.si(), b.si()));
+}
+template <dimension D1, class R1, dimension D2, class R2>
+  requires(D1 != D2)
+constexpr quantity<D1, R1> hypot(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+                "nondim: hypot needs two quantities of the same dimension");
+  return {};
+}
+template <dimension D1, class R1, dimension D2, class R2>
+  requires(D1 != D2)
+constexpr quantity<D1, R1> min(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+                "nondim: min needs two quantities of the same dimension");
+  return {};
+}
+template <dimension D1, class R1, dimension D2, class R2>
+  requires(D1 != D2)
+constexpr quantity<D1, R1> max(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+                "nondim: max needs two quantities of the same dimension");
+  return {};
+}
+
+// Transcendental functions: a dimensionless argument, or a compile error naming the dimension.
+#define NONDIM_DIMENSIONLESS_FUNCTION(fn)                                                              \
+  template <class R>                                                                                  \
+  inline R fn(const quantity<dims::dimensionless, R>& q) noexcept {                                   \
+    return std::fn(q.si());                                                                           \
+  }                                                                                                   \
+  template <dimension D, class R>                                                                     \
+    requires(!D.is_dimensionless())                                                                   \
+  inline R fn(const quantity<D, R>&) noexcept {                                                       \
+    static_assert(detail::dimensions_involved<detail::spell<D>>,                                      \
+                  "nondim: " #fn " needs a dimensionless argument; divide by a reference scale first"); \
+    return R{};                                                                                       \
+  }
+NONDIM_DIMENSIONLESS_FUNCTION(exp)
+NONDIM_DIMENSIONLESS_FUNCTION(log)
+NONDIM_DIMENSIONLESS_FUNCTION(log10)
+NONDIM_DIMENSIONLESS_FUNCTION(log2)
+NONDIM_DIMENSIONLESS_FUNCTION(expm1)
+NONDIM_DIMENSIONLESS_FUNCTION(log1p)
+NONDIM_DIMENSIONLESS_FUNCTION(sin)
+NONDIM_DIMENSIONLESS_FUNCTION(cos)
+NONDIM_DIMENSIONLESS_FUNCTION(tan)
+NONDIM_DIMENSIONLESS_FUNCTION(asin)
+NONDIM_DIMENSIONLESS_FUNCTION(acos)
+NONDIM_DIMENSIONLESS_FUNCTION(atan)
+NONDIM_DIMENSIONLESS_FUNCTION(sinh)
+NONDIM_DIMENSIONLESS_FUNCTION(cosh)
+NONDIM_DIMENSIONLESS_FUNCTION(tanh)
+NONDIM_DIMENSIONLESS_FUNCTION(erf)
+#undef NONDIM_DIMENSIONLESS_FUNCTION
+
+/// \brief atan2 of two quantities of the same dimension (the angle of a vector).
+template <dimension D, class R>
+inline R atan2(const quantity<D, R>& y, const quantity<D, R>& x) noexcept {
+  return std::atan2(y.si(), x.si());
+}
+
+}  // namespace nondim

@@ -1,0 +1,269 @@
+#pragma once
+/// \file quantity_type.hpp
+/// \brief `quantity<D, Rep>`: a value in coherent SI units whose dimension D is part of its
+/// type. Mixing dimensions is a compile error that names them; the object is exactly a `Rep`.
+
+#include <compare>
+#include <concepts>
+#include <type_traits>
+
+#include "../core/dims.hpp"
+#include "spelling.hpp"
+
+namespace nondim {
+
+template <dimension D, class Rep = double> class quantity;
+
+namespace detail {
+template <class T> struct is_quantity : std::false_type {};
+template <dimension D, class R> struct is_quantity<quantity<D, R>> : std::true_type {};
+}  // namespace detail
+
+/// \brief Any `quantity<D, Rep>`.
+template <class T>
+concept any_quantity = detail::is_quantity<std::remove_cvref_t<T>>::value;
+
+/// \brief A plain number that may scale a quantity.
+template <class T>
+concept scalar = std::is_arithmetic_v<T>;
+
+/// \brief A physical value whose dimension is checked at compile time.
+///
+/// The value is kept in coherent SI units (metre, kilogram, second, ...), so arithmetic is
+/// the arithmetic of `Rep` with no conversion: `sizeof(quantity<D>) == sizeof(Rep)`.
+/// Make one from a unit (`2.0 * units::ft`) or from an SI value (`quantity<D>::from_si(x)`);
+/// read one in a unit (`q / units::ft`, `q.in(units::ft)`) or in SI (`q.si()`).
+/// \tparam D   its dimension
+/// \tparam Rep the number type (double by default)
+template <dimension D, class Rep>
+class quantity {
+ public:
+  using rep = Rep;
+  static constexpr dimension dim = D;
+
+  constexpr quantity() noexcept = default;
+
+  /// \brief A quantity from its value in coherent SI units.
+  [[nodiscard]] static constexpr quantity from_si(Rep si_value) noexcept { return quantity(si_value, tag{}); }
+
+  /// \brief A dimensionless value from a number (implicit: it is a number).
+  constexpr quantity(Rep v) noexcept  // NOLINT(google-explicit-constructor)
+    requires(D.is_dimensionless())
+      : value_(v) {}
+
+  /// Refused: a raw number has no unit. Multiply it by one, or say it is SI.
+  template <scalar T>
+    requires(!D.is_dimensionless())
+  constexpr quantity(T) noexcept {  // NOLINT(google-explicit-constructor)
+    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                  "nondim: a raw number cannot become a dimensional quantity; write `x * units::m` "
+                  "(its unit) or `quantity<D>::from_si(x)`");
+  }
+
+  /// \brief Converting between representations of the same dimension.
+  template <class R2>
+    requires(!std::same_as<R2, Rep> && std::convertible_to<R2, Rep>)
+  constexpr explicit quantity(const quantity<D, R2>& o) noexcept : value_(static_cast<Rep>(o.si())) {}
+
+  /// Refused: a quantity of another dimension (the poisoned overload names both).
+  template <dimension D2, class R2>
+    requires(D2 != D)
+  constexpr quantity(const quantity<D2, R2>&) noexcept {  // NOLINT(google-explicit-constructor)
+    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+                  "nondim: cannot initialise or assign a quantity from one of another dimension "
+                  "(target first, source second)");
+  }
+
+  /// \brief The value in coherent SI units.
+  [[nodiscard]] constexpr Rep si() const noexcept { return value_; }
+
+  /// \brief A dimensionless value is a number.
+  constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
+    requires(D.is_dimensionless())
+  {
+    return value_;
+  }
+  /// Refused: a dimensional value is not a number until divided by a unit.
+  template <scalar T>
+    requires(!D.is_dimensionless())
+  constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
+    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                  "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
+                  "(`q / units::m`) or read `q.si()`");
+    return T{};
+  }
+
+  constexpr quantity operator+() const noexcept { return *this; }
+  constexpr quantity operator-() const noexcept { return from_si(-value_); }
+
+  constexpr quantity& operator+=(const quantity& o) noexcept {
+    value_ += o.value_;
+    return *this;
+  }
+  constexpr quantity& operator-=(const quantity& o) noexcept {
+    value_ -= o.value_;
+    return *this;
+  }
+  template <scalar T>
+  constexpr quantity& operator*=(T s) noexcept {
+    value_ *= s;
+    return *this;
+  }
+  template <scalar T>
+  constexpr quantity& operator/=(T s) noexcept {
+    value_ /= s;
+    return *this;
+  }
+  template <dimension D2, class R2>
+    requires(D2 != D)
+  constexpr quantity& operator+=(const quantity<D2, R2>&) noexcept {
+    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+                  "nondim: cannot add a quantity of another dimension");
+    return *this;
+  }
+  template <dimension D2, class R2>
+    requires(D2 != D)
+  constexpr quantity& operator-=(const quantity<D2, R2>&) noexcept {
+    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+                  "nondim: cannot subtract a quantity of another dimension");
+    return *this;
+  }
+
+ private:
+  struct tag {};
+  constexpr quantity(Rep v, tag) noexcept : value_(v) {}
+  Rep value_{};
+};
+
+// ---- same-dimension arithmetic and comparison ------------------------------------------
+
+template <dimension D, class R>
+constexpr quantity<D, R> operator+(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  return quantity<D, R>::from_si(a.si() + b.si());
+}
+template <dimension D, class R>
+constexpr quantity<D, R> operator-(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  return quantity<D, R>::from_si(a.si() - b.si());
+}
+template <dimension D, class R>
+constexpr bool operator==(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  return a.si() == b.si();
+}
+template <dimension D, class R>
+constexpr auto operator<=>(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  return a.si() <=> b.si();
+}
+
+// Poisoned fallbacks: each names the two dimensions.
+template <dimension D1, class R1, dimension D2, class R2>
+  requires(D1 != D2)
+constexpr quantity<D1, R1> operator+(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+                "nondim: cannot add quantities of different dimensions");
+  return {};
+}
+template <dimension D1, class R1, dimension D2, class R2>
+  requires(D1 != D2)
+constexpr quantity<D1, R1> operator-(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+                "nondim: cannot subtract quantities of different dimensions");
+  return {};
+}
+template <dimension D1, class R1, dimension D2, class R2>
+  requires(D1 != D2)
+constexpr bool operator==(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+                "nondim: cannot compare quantities of different dimensions");
+  return false;
+}
+template <dimension D1, class R1, dimension D2, class R2>
+  requires(D1 != D2)
+constexpr std::partial_ordering operator<=>(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+                "nondim: cannot compare quantities of different dimensions");
+  return std::partial_ordering::unordered;
+}
+
+// ---- products and quotients combine dimensions ------------------------------------------
+
+template <dimension D1, dimension D2, class R>
+constexpr quantity<D1 * D2, R> operator*(const quantity<D1, R>& a, const quantity<D2, R>& b) noexcept {
+  return quantity<D1 * D2, R>::from_si(a.si() * b.si());
+}
+template <dimension D1, dimension D2, class R>
+constexpr quantity<D1 / D2, R> operator/(const quantity<D1, R>& a, const quantity<D2, R>& b) noexcept {
+  return quantity<D1 / D2, R>::from_si(a.si() / b.si());
+}
+template <dimension D, class R, scalar T>
+constexpr quantity<D, R> operator*(const quantity<D, R>& a, T s) noexcept {
+  return quantity<D, R>::from_si(a.si() * static_cast<R>(s));
+}
+template <dimension D, class R, scalar T>
+constexpr quantity<D, R> operator*(T s, const quantity<D, R>& a) noexcept {
+  return quantity<D, R>::from_si(static_cast<R>(s) * a.si());
+}
+template <dimension D, class R, scalar T>
+constexpr quantity<D, R> operator/(const quantity<D, R>& a, T s) noexcept {
+  return quantity<D, R>::from_si(a.si() / static_cast<R>(s));
+}
+template <dimension D, class R, scalar T>
+constexpr quantity<dims::dimensionless / D, R> operator/(T s, const quantity<D, R>& a) noexcept {
+  return quantity<dims::dimensionless / D, R>::from_si(static_cast<R>(s) / a.si());
+}
+
+/// \brief A quantity whose type is deduced from a dimension value: `si<dims::force>(12.0)`.
+template <dimension D, class Rep>
+constexpr quantity<D, Rep> si(Rep value) noexcept {
+  return quantity<D, Rep>::from_si(value);
+}
+
+}  // namespace nondim
+
+namespace nondim {
+
+// A raw number added to or compared with a dimensional quantity: refused with the dimension
+// named (without these, the built-in operators would be tried and fail as an ambiguity).
+template <dimension D, class R, scalar T>
+  requires(!D.is_dimensionless())
+constexpr quantity<D, R> operator+(const quantity<D, R>&, T) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
+  return {};
+}
+template <dimension D, class R, scalar T>
+  requires(!D.is_dimensionless())
+constexpr quantity<D, R> operator+(T, const quantity<D, R>&) noexcept {
+  static_assert(detail::dimensions_involved<T, detail::spell<D>>,
+                "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
+  return {};
+}
+template <dimension D, class R, scalar T>
+  requires(!D.is_dimensionless())
+constexpr quantity<D, R> operator-(const quantity<D, R>&, T) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                "nondim: cannot subtract a raw number from a dimensional quantity; give the number a unit");
+  return {};
+}
+template <dimension D, class R, scalar T>
+  requires(!D.is_dimensionless())
+constexpr quantity<D, R> operator-(T, const quantity<D, R>&) noexcept {
+  static_assert(detail::dimensions_involved<T, detail::spell<D>>,
+                "nondim: cannot subtract a dimensional quantity from a raw number; give the number a unit");
+  return {};
+}
+template <dimension D, class R, scalar T>
+  requires(!D.is_dimensionless())
+constexpr bool operator==(const quantity<D, R>&, T) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
+  return false;
+}
+template <dimension D, class R, scalar T>
+  requires(!D.is_dimensionless())
+constexpr std::partial_ordering operator<=>(const quantity<D, R>&, T) noexcept {
+  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
+  return std::partial_ordering::unordered;
+}
+
+}  // namespace nondim

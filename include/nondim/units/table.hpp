@@ -1,0 +1,250 @@
+#pragma once
+/// \file table.hpp
+/// \brief The one table of unit symbols, prefixes and factors. The compile-time constants in
+/// `units::` and the run-time parser both read it; no factor is written anywhere else.
+///
+/// Symbol resolution (documented in the README, "Unit expressions"):
+///  1. an alias is replaced by its canonical symbol (`l` -> `L`, `lbm` -> `lb`, `°C` -> `degC`);
+///  2. a whole symbol wins over prefix + symbol (`min`, `Pa`, `cd`, `h`, `mi`, `ft`, `P`);
+///  3. otherwise the longest prefix whose remainder is a prefixable unit (`da` before `d`);
+///     prefixes apply to SI units and the metric units marked `prefixable`, never to
+///     customary units; the kilogram takes its prefixes on `g`.
+
+#include <array>
+#include <cstdint>
+#include <optional>
+#include <string_view>
+
+#include "../core/dims.hpp"
+
+namespace nondim {
+
+/// \brief One unit symbol: SI value = factor * x (+ offset when it stands alone and is affine).
+struct unit_entry {
+  std::string_view symbol;
+  std::string_view name;
+  double factor;       ///< to coherent SI
+  dimension dim;
+  bool prefixable;     ///< takes SI prefixes
+  int decade;          ///< factor == 10^decade exactly; `no_decade` otherwise (keeps prefixed factors exact)
+  double offset;       ///< affine zero in kelvin (degC, degF); 0 for every other unit
+  std::string_view source;
+};
+
+/// \brief An SI prefix (SI Brochure 9th ed., table 7, with the 2022 additions R r Q q).
+struct prefix_entry {
+  std::string_view symbol;
+  int exponent;  ///< power of ten
+};
+
+namespace detail {
+
+inline constexpr int no_decade = 1000;
+inline constexpr int pow10_min = -40;
+inline constexpr int pow10_max = 40;
+/// Correctly rounded powers of ten (decimal literals are rounded by the compiler once).
+inline constexpr std::array<double, pow10_max - pow10_min + 1> pow10_table{
+1e-40, 1e-39, 1e-38, 1e-37, 1e-36, 1e-35, 1e-34, 1e-33,
+1e-32, 1e-31, 1e-30, 1e-29, 1e-28, 1e-27, 1e-26, 1e-25,
+1e-24, 1e-23, 1e-22, 1e-21, 1e-20, 1e-19, 1e-18, 1e-17,
+1e-16, 1e-15, 1e-14, 1e-13, 1e-12, 1e-11, 1e-10, 1e-9,
+1e-8, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 1e-2, 1e-1,
+1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7,
+1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15,
+1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22, 1e23,
+1e24, 1e25, 1e26, 1e27, 1e28, 1e29, 1e30, 1e31,
+1e32, 1e33, 1e34, 1e35, 1e36, 1e37, 1e38, 1e39,
+1e40
+};
+constexpr double pow10(int e) { return pow10_table.at(static_cast<std::size_t>(e - pow10_min)); }
+
+// Exact definitions shared by several entries (NIST SP 811 (2008) Appendix B.8).
+inline constexpr double foot = 0.3048;
+inline constexpr double inch = 0.0254;
+inline constexpr double pound_mass = 0.45359237;
+inline constexpr double standard_gravity = 9.80665;  // SI Brochure 9th ed. / CGPM 1901
+inline constexpr double pound_force = pound_mass * standard_gravity;  // 4.4482216152605 N
+inline constexpr double btu_it = 1055.05585262;
+inline constexpr double pi = 3.141592653589793238462643383279502884;
+
+using namespace nondim::dims;
+
+constexpr unit_entry si(std::string_view s, std::string_view n, dimension d, std::string_view src) {
+  return {s, n, 1.0, d, true, 0, 0.0, src};
+}
+constexpr unit_entry metric(std::string_view s, std::string_view n, int decade, dimension d, std::string_view src) {
+  return {s, n, pow10(decade), d, true, decade, 0.0, src};
+}
+constexpr unit_entry plain(std::string_view s, std::string_view n, double f, dimension d, std::string_view src) {
+  return {s, n, f, d, false, no_decade, 0.0, src};
+}
+
+inline constexpr const char* brochure_t2 = "SI Brochure 9th ed., table 2";
+inline constexpr const char* brochure_t4 = "SI Brochure 9th ed., table 4";
+inline constexpr const char* brochure_t8 = "SI Brochure 9th ed., table 8";
+inline constexpr const char* nist_b8 = "NIST SP 811 (2008), Appendix B.8";
+inline constexpr const char* nist_b9 = "NIST SP 811 (2008), Appendix B.9";
+
+}  // namespace detail
+
+/// \brief Every unit symbol nondim knows. Order is irrelevant; symbols are unique.
+inline constexpr std::array unit_table{
+    // SI base units (SI Brochure 9th ed., table 2); the kilogram is "k" + "g".
+    detail::si("m", "metre", dims::length, detail::brochure_t2),
+    detail::metric("g", "gram", -3, dims::mass, detail::brochure_t2),
+    detail::si("s", "second", dims::time, detail::brochure_t2),
+    detail::si("A", "ampere", dims::current, detail::brochure_t2),
+    detail::si("K", "kelvin", dims::temperature, detail::brochure_t2),
+    detail::si("mol", "mole", dims::amount, detail::brochure_t2),
+    detail::si("cd", "candela", dims::luminous_intensity, detail::brochure_t2),
+    // SI derived units with special names (table 4)
+    detail::si("rad", "radian", dims::dimensionless, detail::brochure_t4),
+    detail::si("sr", "steradian", dims::dimensionless, detail::brochure_t4),
+    detail::si("Hz", "hertz", dims::frequency, detail::brochure_t4),
+    detail::si("N", "newton", dims::force, detail::brochure_t4),
+    detail::si("Pa", "pascal", dims::pressure, detail::brochure_t4),
+    detail::si("J", "joule", dims::energy, detail::brochure_t4),
+    detail::si("W", "watt", dims::power, detail::brochure_t4),
+    detail::si("C", "coulomb", dims::electric_charge, detail::brochure_t4),
+    detail::si("V", "volt", dims::voltage, detail::brochure_t4),
+    detail::si("F", "farad", dims::capacitance, detail::brochure_t4),
+    detail::si("\u03a9", "ohm", dims::resistance, detail::brochure_t4),
+    detail::si("S", "siemens", dims::conductance, detail::brochure_t4),
+    detail::si("Wb", "weber", dims::magnetic_flux, detail::brochure_t4),
+    detail::si("T", "tesla", dims::magnetic_flux_density, detail::brochure_t4),
+    detail::si("H", "henry", dims::inductance, detail::brochure_t4),
+    detail::si("lm", "lumen", dims::luminous_intensity, detail::brochure_t4),
+    detail::si("lx", "lux", dims::luminance, detail::brochure_t4),
+    detail::si("Bq", "becquerel", dims::frequency, detail::brochure_t4),
+    detail::si("Gy", "gray", dims::specific_energy, detail::brochure_t4),
+    detail::si("Sv", "sievert", dims::specific_energy, detail::brochure_t4),
+    detail::si("kat", "katal", dims::catalytic_activity, detail::brochure_t4),
+    // Celsius: affine when it stands alone, an interval of 1 K inside a compound unit (table 4)
+    unit_entry{"degC", "degree Celsius", 1.0, dims::temperature, false, 0, 273.15, detail::brochure_t4},
+    // non-SI units accepted for use with the SI (table 8)
+    detail::plain("min", "minute", 60.0, dims::time, detail::brochure_t8),
+    detail::plain("h", "hour", 3600.0, dims::time, detail::brochure_t8),
+    detail::plain("d", "day", 86400.0, dims::time, detail::brochure_t8),
+    detail::plain("au", "astronomical unit", 149597870700.0, dims::length, detail::brochure_t8),
+    detail::plain("deg", "degree (plane angle)", detail::pi / 180.0, dims::dimensionless, detail::brochure_t8),
+    detail::plain("ha", "hectare", 1.0e4, dims::area, detail::brochure_t8),
+    detail::metric("L", "litre", -3, dims::volume, detail::brochure_t8),
+    detail::metric("t", "tonne", 3, dims::mass, detail::brochure_t8),
+    unit_entry{"Da", "dalton", 1.66053906660e-27, dims::mass, true, detail::no_decade, 0.0, detail::brochure_t8},
+    unit_entry{"eV", "electronvolt", 1.602176634e-19, dims::energy, true, detail::no_decade, 0.0, detail::brochure_t8},
+    // other metric units common in handbooks: take prefixes (mbar, kcal, cP, cSt)
+    detail::metric("bar", "bar", 5, dims::pressure, detail::nist_b8),
+    detail::metric("P", "poise", -1, dims::dynamic_viscosity, detail::nist_b8),
+    detail::metric("St", "stokes", -4, dims::kinematic_viscosity, detail::nist_b8),
+    detail::metric("dyn", "dyne", -5, dims::force, detail::nist_b8),
+    detail::metric("erg", "erg", -7, dims::energy, detail::nist_b8),
+    unit_entry{"cal", "calorie (International Table)", 4.1868, dims::energy, true, detail::no_decade, 0.0, detail::nist_b8},
+    unit_entry{"cal_th", "calorie (thermochemical)", 4.184, dims::energy, true, detail::no_decade, 0.0, detail::nist_b8},
+    detail::plain("\u00c5", "angstrom", 1.0e-10, dims::length, detail::nist_b8),
+    detail::plain("kgf", "kilogram-force", detail::standard_gravity, dims::force, detail::nist_b8),
+    detail::plain("atm", "standard atmosphere", 101325.0, dims::pressure, detail::nist_b8),
+    detail::plain("Torr", "torr", 101325.0 / 760.0, dims::pressure, detail::nist_b8),
+    detail::plain("mmHg", "millimetre of mercury, conventional", 133.322387415, dims::pressure, detail::nist_b8),
+    detail::plain("nmi", "nautical mile", 1852.0, dims::length, detail::nist_b8),
+    detail::plain("knot", "knot", 1852.0 / 3600.0, dims::velocity, detail::nist_b8),
+    detail::plain("rpm", "revolution per minute", 2.0 * detail::pi / 60.0, dims::frequency, detail::nist_b8),
+    detail::plain("rev", "revolution", 2.0 * detail::pi, dims::dimensionless, detail::nist_b8),
+    // US customary and imperial units, never prefixed (NIST SP 811 Appendix B.8)
+    detail::plain("ft", "foot", detail::foot, dims::length, detail::nist_b8),
+    detail::plain("in", "inch", detail::inch, dims::length, detail::nist_b8),
+    detail::plain("yd", "yard", 3.0 * detail::foot, dims::length, detail::nist_b8),
+    detail::plain("mi", "mile (international)", 5280.0 * detail::foot, dims::length, detail::nist_b8),
+    detail::plain("mil", "mil (0.001 in)", detail::inch / 1000.0, dims::length, detail::nist_b8),
+    detail::plain("lb", "pound (avoirdupois)", detail::pound_mass, dims::mass, detail::nist_b8),
+    detail::plain("oz", "ounce (avoirdupois)", detail::pound_mass / 16.0, dims::mass, detail::nist_b8),
+    detail::plain("gr", "grain", detail::pound_mass / 7000.0, dims::mass, detail::nist_b8),
+    detail::plain("slug", "slug", detail::pound_force / detail::foot, dims::mass, detail::nist_b8),
+    detail::plain("lbf", "pound-force", detail::pound_force, dims::force, detail::nist_b8),
+    detail::plain("kip", "kip (1000 lbf)", 1000.0 * detail::pound_force, dims::force, detail::nist_b8),
+    detail::plain("pdl", "poundal", detail::pound_mass * detail::foot, dims::force, detail::nist_b8),
+    detail::plain("psi", "pound-force per square inch", detail::pound_force / (detail::inch * detail::inch),
+                  dims::pressure, detail::nist_b8),
+    detail::plain("ksi", "kip per square inch", 1000.0 * detail::pound_force / (detail::inch * detail::inch),
+                  dims::pressure, detail::nist_b8),
+    detail::plain("inHg", "inch of mercury, conventional", 3386.38864, dims::pressure, detail::nist_b8),
+    detail::plain("inH2O", "inch of water, conventional", detail::inch * 1000.0 * detail::standard_gravity,
+                  dims::pressure, detail::nist_b8),
+    detail::plain("Btu", "British thermal unit (International Table)", detail::btu_it, dims::energy, detail::nist_b8),
+    detail::plain("hp", "horsepower (550 ft lbf/s)", 550.0 * detail::foot * detail::pound_force, dims::power,
+                  detail::nist_b8),
+    detail::plain("TR", "ton of refrigeration (12000 Btu/h)", 12000.0 * detail::btu_it / 3600.0, dims::power,
+                  detail::nist_b8),
+    detail::plain("gal", "gallon (US liquid)", 231.0 * detail::inch * detail::inch * detail::inch, dims::volume,
+                  detail::nist_b8),
+    detail::plain("mph", "mile per hour", 5280.0 * detail::foot / 3600.0, dims::velocity, detail::nist_b8),
+    detail::plain("lbmol", "pound-mole", 1000.0 * detail::pound_mass, dims::amount, "common practice, no source"),
+    // Fahrenheit and Rankine: degF affine alone, an interval inside a compound unit; degR never affine
+    unit_entry{"degF", "degree Fahrenheit", 5.0 / 9.0, dims::temperature, false, detail::no_decade,
+               459.67 * 5.0 / 9.0, detail::nist_b9},
+    detail::plain("degR", "degree Rankine", 5.0 / 9.0, dims::temperature, detail::nist_b9),
+};
+
+/// \brief Other spellings of table symbols.
+struct unit_alias {
+  std::string_view alias;
+  std::string_view symbol;
+};
+inline constexpr std::array unit_aliases{
+    unit_alias{"l", "L"},          unit_alias{"lbm", "lb"},        unit_alias{"Ohm", "\u03a9"},
+    unit_alias{"\u2126", "\u03a9"}, unit_alias{"\u00b0C", "degC"}, unit_alias{"\u2103", "degC"},
+    unit_alias{"\u00b0F", "degF"}, unit_alias{"\u2109", "degF"},  unit_alias{"\u00b0R", "degR"},
+    unit_alias{"\u00b0", "deg"},   unit_alias{"kn", "knot"},      unit_alias{"kt", "knot"},
+    unit_alias{"BTU", "Btu"},      unit_alias{"torr", "Torr"},    unit_alias{"\u212b", "\u00c5"},
+};
+
+/// \brief SI prefixes, longest symbol first where one is a prefix of another ("da" before "d").
+inline constexpr std::array prefix_table{
+    prefix_entry{"Q", 30},  prefix_entry{"R", 27},  prefix_entry{"Y", 24},  prefix_entry{"Z", 21},
+    prefix_entry{"E", 18},  prefix_entry{"P", 15},  prefix_entry{"T", 12},  prefix_entry{"G", 9},
+    prefix_entry{"M", 6},   prefix_entry{"k", 3},   prefix_entry{"h", 2},   prefix_entry{"da", 1},
+    prefix_entry{"d", -1},  prefix_entry{"c", -2},  prefix_entry{"m", -3},  prefix_entry{"u", -6},
+    prefix_entry{"\u00b5", -6}, prefix_entry{"\u03bc", -6}, prefix_entry{"n", -9}, prefix_entry{"p", -12},
+    prefix_entry{"f", -15}, prefix_entry{"a", -18}, prefix_entry{"z", -21}, prefix_entry{"y", -24},
+    prefix_entry{"r", -27}, prefix_entry{"q", -30},
+};
+
+/// \brief A symbol resolved against the table: which entry, which prefix, the SI factor.
+struct resolved_symbol {
+  const unit_entry* entry;
+  const prefix_entry* prefix;  ///< null when unprefixed
+  double factor;               ///< entry factor times the prefix, exact for decade units
+};
+
+/// \brief The table entry with exactly this symbol (after aliases), or null.
+constexpr const unit_entry* find_unit_entry(std::string_view symbol) noexcept {
+  for (const auto& a : unit_aliases)
+    if (a.alias == symbol) {
+      symbol = a.symbol;
+      break;
+    }
+  for (const auto& e : unit_table)
+    if (e.symbol == symbol) return &e;
+  return nullptr;
+}
+
+/// \brief Resolve a symbol by the rules at the top of this file; empty when unknown.
+constexpr std::optional<resolved_symbol> resolve_unit_symbol(std::string_view symbol) noexcept {
+  if (const unit_entry* e = find_unit_entry(symbol)) return resolved_symbol{e, nullptr, e->factor};
+  const prefix_entry* best = nullptr;
+  const unit_entry* best_unit = nullptr;
+  for (const auto& p : prefix_table) {
+    if (symbol.size() <= p.symbol.size() || symbol.substr(0, p.symbol.size()) != p.symbol) continue;
+    const unit_entry* u = find_unit_entry(symbol.substr(p.symbol.size()));
+    if (u == nullptr || !u->prefixable) continue;
+    if (best == nullptr || p.symbol.size() > best->symbol.size()) {
+      best = &p;
+      best_unit = u;
+    }
+  }
+  if (best == nullptr) return std::nullopt;
+  const double f = best_unit->decade != detail::no_decade ? detail::pow10(best_unit->decade + best->exponent)
+                                                          : best_unit->factor * detail::pow10(best->exponent);
+  return resolved_symbol{best_unit, best, f};
+}
+
+}  // namespace nondim
