@@ -26,13 +26,13 @@ inline std::string to_string(const rational& r) {
 
 namespace detail {
 
-inline constexpr std::array<std::string_view, base_dimension_count> dimension_symbols_unicode{
-    "L", "M", "T", "I", "\u0398", "N", "J"};
-inline constexpr std::array<std::string_view, base_dimension_count> dimension_symbols_ascii{
-    "L", "M", "T", "I", "Theta", "N", "J"};
+inline constexpr std::array<std::string_view, base_dimension_count> dimension_symbols_unicode{"L",      "M", "T", "I",
+                                                                                              "\u0398", "N", "J"};
+inline constexpr std::array<std::string_view, base_dimension_count> dimension_symbols_ascii{"L",     "M", "T", "I",
+                                                                                            "Theta", "N", "J"};
 /// Coherent SI base unit of each base dimension, in dimension order.
-inline constexpr std::array<std::string_view, base_dimension_count> base_unit_symbols{"m",  "kg",  "s", "A",
-                                                                                     "K", "mol", "cd"};
+inline constexpr std::array<std::string_view, base_dimension_count> base_unit_symbols{"m", "kg",  "s", "A",
+                                                                                      "K", "mol", "cd"};
 /// The order in which base units are written in a unit expression (kg m s A K mol cd, as the
 /// SI Brochure's table 4 writes them, mass first).
 inline constexpr std::array<std::size_t, base_dimension_count> unit_write_order{1, 0, 2, 3, 4, 5, 6};
