@@ -238,6 +238,37 @@ static_assert([] {
 }());
 static_assert(textbook::all_problems.size() >= 20);
 
+// ---- overflow: refused, never a wrong basis ---------------------------------------------
+
+namespace {
+// p = 3037000507 and q = 3037000537 are primes with p q > 2^63 - 1 (python3-sympy nextprime)
+constexpr std::int64_t p_big = 3037000507;
+constexpr std::int64_t q_big = 3037000537;
+constexpr dimension root_pq{rational{1, p_big}, rational{1, q_big}, 0};
+constexpr dimension root_p3{rational{1, p_big}, rational{1, 3}, 0};
+
+constexpr bool guarded_add_overflows() {
+  detail::guarded_arithmetic g;
+  const rational r = g.add(rational{1, p_big}, rational{1, q_big});  // denominator p q
+  return g.overflow && r.is_zero();
+}
+constexpr bool guarded_ops_agree_with_rational() {
+  detail::guarded_arithmetic g;
+  const rational a{3, 7};
+  const rational b{-5, 11};
+  return g.add(a, b) == a + b && g.sub(a, b) == a - b && g.mul(a, b) == a * b && g.div(a, b) == a / b &&
+         g.neg(a) == -a && !g.overflow;
+}
+}  // namespace
+static_assert(guarded_add_overflows());
+static_assert(guarded_ops_agree_with_rational());
+// the group X^(pq) L^(-q) M^(-p) cannot be written in int64 exponents
+static_assert(detail::pi_basis_v<root_pq, dims::length, dims::mass>.overflow);
+// the ranking key |1/p| + |1/q| of a candidate does not fit
+static_assert(detail::pi_basis_v<dims::length, root_pq, dims::mass>.overflow);
+// with q = 3 it fits: X^(3p) L^(-3) M^(-p), checked by hand
+static_assert(pi_exponents<root_p3, dims::length, dims::mass>() == groups<3, 1>{{{3 * p_big, -3, -p_big}}});
+
 // ---- values of the groups ---------------------------------------------------------------
 
 // Constant evaluation works too: a 2 N drag on a 0.1 m sphere in air at 3 m/s.

@@ -70,7 +70,7 @@ consteval compile_time_basis<N> solve_pi_basis(const std::array<exponent_column,
     // the candidates for repeating variables, in the order of the rule
     std::array<std::size_t, N> bases{};
     std::array<rational, N> weight{};
-    for (std::size_t j = 0; j < N; ++j) {
+    for (std::size_t j = 1; j < N; ++j) {  // the dependent variable is not ranked
       bases[j] = nonzero_count(col[j]);
       for (const auto& e : col[j]) weight[j] = g.add(weight[j], g.abs(e));
     }
@@ -148,7 +148,7 @@ template <dimension... D>
 constexpr bool pi_basis_fits() {
   static_assert(holds<!pi_basis_v<D...>.overflow, spell<D>...>,
                 "nondim: the exact basis of these dimensions does not fit in 64-bit rationals at compile "
-                "time; use the run-time analyze(), which falls back to unbounded rationals");
+                "time (an exponent or an intermediate fraction exceeds int64); it is refused, not rounded");
   return !pi_basis_v<D...>.overflow;
 }
 
