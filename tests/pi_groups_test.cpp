@@ -22,7 +22,8 @@ using namespace nondim;
 
 namespace {
 
-template <const auto& P> struct problem_traits {
+template <const auto& P>
+struct problem_traits {
   template <std::size_t... I>
   static constexpr auto basis(std::index_sequence<I...>) {
     return pi_basis<P.variables[I].dim...>();
@@ -35,11 +36,13 @@ template <const auto& P> struct problem_traits {
 };
 
 /// pi_basis<the dimensions of P...>()
-template <const auto& P> constexpr auto basis_of() {
+template <const auto& P>
+constexpr auto basis_of() {
   return problem_traits<P>::basis(std::make_index_sequence<problem_traits<P>::n>{});
 }
 /// pi_exponents<the dimensions of P...>()
-template <const auto& P> constexpr auto exponents_of() {
+template <const auto& P>
+constexpr auto exponents_of() {
   return problem_traits<P>::exponents(std::make_index_sequence<problem_traits<P>::n>{});
 }
 
@@ -82,8 +85,8 @@ static_assert(pi_group_count<dims::force, dims::density, dims::velocity, dims::l
 // Rough pipe (White, ch. 6, Moody chart, from memory): Euler dp/(rho U^2), 1/Re, L/D, eps/D.
 // D, L and eps tie on the key (one base dimension, |exponent| sum 1): input order picks D.
 static_assert(exponents_of<textbook::pipe_pressure_drop>() ==
-              groups<7, 4>{{{1, -1, -2, 0, 0, 0, 0}, {0, -1, -1, -1, 1, 0, 0}, {0, 0, 0, -1, 0, 1, 0},
-                            {0, 0, 0, -1, 0, 0, 1}}});
+              groups<7, 4>{
+                  {{1, -1, -2, 0, 0, 0, 0}, {0, -1, -1, -1, 1, 0, 0}, {0, 0, 0, -1, 0, 1, 0}, {0, 0, 0, -1, 0, 0, 1}}});
 static_assert(repeating_are<textbook::pipe_pressure_drop>(std::array<std::size_t, 3>{3, 2, 1}));
 
 // Ship hull (White, ch. 5, from memory): force coefficient, 1/Re, and g L/U^2 = 1/Fr^2.
@@ -149,12 +152,11 @@ static_assert(repeating_are<textbook::forced_convection>(std::array<std::size_t,
 
 // Natural convection (Incropera & DeWitt, ch. 9, from memory): beta dT is a group, and
 // mu^2/(rho^2 g L^3) = beta dT / Gr; the others are h and k against L, beta, g, rho.
-static_assert(exponents_of<textbook::natural_convection>() ==
-              groups<9, 5>{{{2, 0, -3, -3, -2, 0, -2, 0, 0},
-                            {0, 2, -5, -3, -2, 0, -2, 0, 0},
-                            {0, 0, 0, 0, 1, 1, 0, 0, 0},
-                            {0, 0, -3, -1, 0, 0, -2, 2, 0},
-                            {0, 0, -1, -1, -1, 0, 0, 0, 1}}});
+static_assert(exponents_of<textbook::natural_convection>() == groups<9, 5>{{{2, 0, -3, -3, -2, 0, -2, 0, 0},
+                                                                            {0, 2, -5, -3, -2, 0, -2, 0, 0},
+                                                                            {0, 0, 0, 0, 1, 1, 0, 0, 0},
+                                                                            {0, 0, -3, -1, 0, 0, -2, 2, 0},
+                                                                            {0, 0, -1, -1, -1, 0, 0, 0, 1}}});
 static_assert(repeating_are<textbook::natural_convection>(std::array<std::size_t, 4>{2, 4, 3, 6}));
 
 // Transient conduction (Incropera & DeWitt, ch. 5, from memory): theta = f(Fo, Bi) with the
@@ -205,7 +207,8 @@ static_assert(exponents_of<textbook::accelerometer_noise>() == groups<3, 1>{{{2,
 // positive exponent and otherwise only repeating variables, in input order, gcd 1, and each
 // group dimensionless (the pi theorem; Buckingham, Phys. Rev. 4 (1914) 345).
 namespace {
-template <const auto& P> constexpr bool basis_is_classical() {
+template <const auto& P>
+constexpr bool basis_is_classical() {
   constexpr auto b = basis_of<P>();
   constexpr std::size_t n = problem_traits<P>::n;
   if (b.group_count + b.rank != n) return false;
@@ -233,7 +236,7 @@ template <const auto& P> constexpr bool basis_is_classical() {
 
 static_assert([] {
   bool all = true;
-  textbook::for_each_problem([&]<const auto& P>() { all = all && basis_is_classical<P>(); });
+  textbook::for_each_problem([&]<const auto & P>() { all = all && basis_is_classical<P>(); });
   return all;
 }());
 static_assert(textbook::all_problems.size() >= 20);
@@ -362,7 +365,7 @@ TEST_SUITE("pi_groups") {
     const auto rho = 998.2 * units::kg / units::m3;
     const auto g = 9.80665 * units::m / (units::s * units::s);
     const auto d = 1.0e-3 * units::m;
-    const quantity<dims::dimensionless> theta = 0.0;  // fully wetting
+    const quantity<dims::dimensionless> theta = 0.0;                                   // fully wetting
     const double h = 4.0 * sigma.si() * std::cos(0.0) / (rho.si() * g.si() * d.si());  // Jurin
     const auto v = pi_groups(h * units::m, sigma, rho, g, d, theta);
     REQUIRE(v.size() == 3);

@@ -41,35 +41,49 @@ struct problem_view {
 
 // ---- fluid mechanics ----------------------------------------------------------------------
 
-inline constexpr problem<5> sphere_drag{
-    "drag on a smooth sphere",
-    "White, Fluid Mechanics, ch. 5 (from memory)",
-    {{{"F", dims::force}, {"rho", dims::density}, {"U", dims::velocity}, {"D", dims::length},
-      {"mu", dims::dynamic_viscosity}}}};
+inline constexpr problem<5> sphere_drag{"drag on a smooth sphere",
+                                        "White, Fluid Mechanics, ch. 5 (from memory)",
+                                        {{{"F", dims::force},
+                                          {"rho", dims::density},
+                                          {"U", dims::velocity},
+                                          {"D", dims::length},
+                                          {"mu", dims::dynamic_viscosity}}}};
 
-inline constexpr problem<7> pipe_pressure_drop{
-    "pressure drop in a rough pipe",
-    "White, Fluid Mechanics, ch. 5 and 6 (Moody chart; from memory)",
-    {{{"dp", dims::pressure}, {"rho", dims::density}, {"U", dims::velocity}, {"D", dims::length},
-      {"mu", dims::dynamic_viscosity}, {"L", dims::length}, {"eps", dims::length}}}};
+inline constexpr problem<7> pipe_pressure_drop{"pressure drop in a rough pipe",
+                                               "White, Fluid Mechanics, ch. 5 and 6 (Moody chart; from memory)",
+                                               {{{"dp", dims::pressure},
+                                                 {"rho", dims::density},
+                                                 {"U", dims::velocity},
+                                                 {"D", dims::length},
+                                                 {"mu", dims::dynamic_viscosity},
+                                                 {"L", dims::length},
+                                                 {"eps", dims::length}}}};
 
-inline constexpr problem<6> ship_resistance{
-    "resistance of a ship hull",
-    "White, Fluid Mechanics, ch. 5 (Froude and Reynolds scaling; from memory)",
-    {{{"F", dims::force}, {"rho", dims::density}, {"U", dims::velocity}, {"L", dims::length},
-      {"mu", dims::dynamic_viscosity}, {"g", dims::acceleration}}}};
+inline constexpr problem<6> ship_resistance{"resistance of a ship hull",
+                                            "White, Fluid Mechanics, ch. 5 (Froude and Reynolds scaling; from memory)",
+                                            {{{"F", dims::force},
+                                              {"rho", dims::density},
+                                              {"U", dims::velocity},
+                                              {"L", dims::length},
+                                              {"mu", dims::dynamic_viscosity},
+                                              {"g", dims::acceleration}}}};
 
-inline constexpr problem<5> vortex_shedding{
-    "vortex shedding from a cylinder",
-    "White, Fluid Mechanics, ch. 5 (Strouhal number; from memory)",
-    {{{"f", dims::frequency}, {"U", dims::velocity}, {"D", dims::length}, {"rho", dims::density},
-      {"mu", dims::dynamic_viscosity}}}};
+inline constexpr problem<5> vortex_shedding{"vortex shedding from a cylinder",
+                                            "White, Fluid Mechanics, ch. 5 (Strouhal number; from memory)",
+                                            {{{"f", dims::frequency},
+                                              {"U", dims::velocity},
+                                              {"D", dims::length},
+                                              {"rho", dims::density},
+                                              {"mu", dims::dynamic_viscosity}}}};
 
-inline constexpr problem<6> pump_power{
-    "power of a centrifugal pump",
-    "White, Fluid Mechanics, ch. 11 (pump similarity rules; from memory)",
-    {{{"P", dims::power}, {"rho", dims::density}, {"N", dims::frequency}, {"D", dims::length},
-      {"Q", dims::volume_flow_rate}, {"mu", dims::dynamic_viscosity}}}};
+inline constexpr problem<6> pump_power{"power of a centrifugal pump",
+                                       "White, Fluid Mechanics, ch. 11 (pump similarity rules; from memory)",
+                                       {{{"P", dims::power},
+                                         {"rho", dims::density},
+                                         {"N", dims::frequency},
+                                         {"D", dims::length},
+                                         {"Q", dims::volume_flow_rate},
+                                         {"mu", dims::dynamic_viscosity}}}};
 
 inline constexpr problem<4> weir_flow{
     "flow over a rectangular weir",
@@ -89,7 +103,10 @@ inline constexpr problem<4> boundary_layer{
 inline constexpr problem<5> stokes_settling{
     "settling velocity of a small sphere",
     "White, Fluid Mechanics, ch. 7 (Stokes: V = drho g d^2 / (18 mu); from memory)",
-    {{{"V", dims::velocity}, {"d", dims::length}, {"drho", dims::density}, {"g", dims::acceleration},
+    {{{"V", dims::velocity},
+      {"d", dims::length},
+      {"drho", dims::density},
+      {"g", dims::acceleration},
       {"mu", dims::dynamic_viscosity}}}};
 
 inline constexpr problem<3> deep_water_wave{
@@ -111,8 +128,12 @@ inline constexpr problem<6> capillary_rise{
     "capillary rise in a thin tube",
     "Jurin's law, h = 4 sigma cos(theta) / (rho g d) (de Gennes, Brochard-Wyart, Quere, "
     "Capillarity and Wetting Phenomena, ch. 1; from memory)",
-    {{{"h", dims::length}, {"sigma", dims::surface_tension}, {"rho", dims::density}, {"g", dims::acceleration},
-      {"d", dims::length}, {"theta", dims::dimensionless}}}};
+    {{{"h", dims::length},
+      {"sigma", dims::surface_tension},
+      {"rho", dims::density},
+      {"g", dims::acceleration},
+      {"d", dims::length},
+      {"theta", dims::dimensionless}}}};
 
 inline constexpr problem<4> drop_oscillation{
     "oscillation frequency of a free liquid drop",
@@ -129,28 +150,45 @@ inline constexpr problem<4> drag_without_density{
 inline constexpr problem<7> forced_convection{
     "forced convection from a tube in cross flow",
     "Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, ch. 6 (Nu = f(Re, Pr); from memory)",
-    {{{"h", dims::heat_transfer_coefficient}, {"k", dims::thermal_conductivity}, {"U", dims::velocity},
-      {"D", dims::length}, {"rho", dims::density}, {"mu", dims::dynamic_viscosity},
+    {{{"h", dims::heat_transfer_coefficient},
+      {"k", dims::thermal_conductivity},
+      {"U", dims::velocity},
+      {"D", dims::length},
+      {"rho", dims::density},
+      {"mu", dims::dynamic_viscosity},
       {"cp", dims::specific_heat_capacity}}}};
 
 inline constexpr problem<9> natural_convection{
     "natural convection from a vertical plate",
     "Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, ch. 9 (Nu = f(Gr, Pr); from memory)",
-    {{{"h", dims::heat_transfer_coefficient}, {"k", dims::thermal_conductivity}, {"L", dims::length},
-      {"g", dims::acceleration}, {"beta", dims::thermal_expansion_coefficient}, {"dT", dims::temperature},
-      {"rho", dims::density}, {"mu", dims::dynamic_viscosity}, {"cp", dims::specific_heat_capacity}}}};
+    {{{"h", dims::heat_transfer_coefficient},
+      {"k", dims::thermal_conductivity},
+      {"L", dims::length},
+      {"g", dims::acceleration},
+      {"beta", dims::thermal_expansion_coefficient},
+      {"dT", dims::temperature},
+      {"rho", dims::density},
+      {"mu", dims::dynamic_viscosity},
+      {"cp", dims::specific_heat_capacity}}}};
 
 inline constexpr problem<6> transient_conduction{
     "transient conduction in a plane wall",
     "Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, ch. 5 (theta = f(Fo, Bi); from memory)",
-    {{{"theta", dims::dimensionless}, {"t", dims::time}, {"alpha", dims::thermal_diffusivity},
-      {"L", dims::length}, {"h", dims::heat_transfer_coefficient}, {"k", dims::thermal_conductivity}}}};
+    {{{"theta", dims::dimensionless},
+      {"t", dims::time},
+      {"alpha", dims::thermal_diffusivity},
+      {"L", dims::length},
+      {"h", dims::heat_transfer_coefficient},
+      {"k", dims::thermal_conductivity}}}};
 
 inline constexpr problem<5> mass_transfer{
     "convective mass transfer from a plate",
     "Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, ch. 6 (Sh = f(Re, Sc); from memory)",
-    {{{"hm", dims::mass_transfer_coefficient}, {"DAB", dims::mass_diffusivity}, {"L", dims::length},
-      {"U", dims::velocity}, {"nu", dims::kinematic_viscosity}}}};
+    {{{"hm", dims::mass_transfer_coefficient},
+      {"DAB", dims::mass_diffusivity},
+      {"L", dims::length},
+      {"U", dims::velocity},
+      {"nu", dims::kinematic_viscosity}}}};
 
 // ---- mechanics, gravitation, gases, electricity -------------------------------------------
 
@@ -164,10 +202,9 @@ inline constexpr problem<3> spring_mass{
     "Halliday, Resnick & Walker, Fundamentals of Physics, ch. 15 (omega = sqrt(k/m); from memory)",
     {{{"omega", dims::angular_velocity}, {"k", dims::stiffness}, {"m", dims::mass}}}};
 
-inline constexpr problem<3> spring_force{
-    "force on a linear spring (M, L, T appear, rank 2)",
-    "Hooke's law F = k x; DESIGN.md's rank example (common practice, no source)",
-    {{{"F", dims::force}, {"k", dims::stiffness}, {"x", dims::length}}}};
+inline constexpr problem<3> spring_force{"force on a linear spring (M, L, T appear, rank 2)",
+                                         "Hooke's law F = k x; DESIGN.md's rank example (common practice, no source)",
+                                         {{{"F", dims::force}, {"k", dims::stiffness}, {"x", dims::length}}}};
 
 inline constexpr problem<4> kepler_orbit{
     "period of a planetary orbit",
@@ -178,13 +215,15 @@ inline constexpr problem<4> kepler_orbit{
 inline constexpr problem<5> ideal_gas{
     "state of an ideal gas",
     "p V = n R T (SI Brochure 9th ed. defines R = N_A k; Cengel & Boles, Thermodynamics, ch. 3)",
-    {{{"p", dims::pressure}, {"V", dims::volume}, {"n", dims::amount}, {"T", dims::temperature},
+    {{{"p", dims::pressure},
+      {"V", dims::volume},
+      {"n", dims::amount},
+      {"T", dims::temperature},
       {"R", dims::molar_gas_constant}}}};
 
-inline constexpr problem<3> rc_circuit{
-    "time constant of an RC circuit",
-    "tau = R C (common practice, no source)",
-    {{{"tau", dims::time}, {"R", dims::resistance}, {"C", dims::capacitance}}}};
+inline constexpr problem<3> rc_circuit{"time constant of an RC circuit",
+                                       "tau = R C (common practice, no source)",
+                                       {{{"tau", dims::time}, {"R", dims::resistance}, {"C", dims::capacitance}}}};
 
 inline constexpr problem<4> wire_resistance{
     "resistance of a uniform wire",
@@ -196,7 +235,8 @@ inline constexpr problem<4> wire_resistance{
 /// Fracture toughness has the dimension of pressure times length^(1/2) (Pa m^(1/2)).
 inline constexpr dimension fracture_toughness = dims::pressure * nondim::pow(dims::length, rational{1, 2});
 /// Amplitude spectral density of acceleration: (m/s^2)/Hz^(1/2).
-inline constexpr dimension acceleration_noise_density = dims::acceleration / nondim::pow(dims::frequency, rational{1, 2});
+inline constexpr dimension acceleration_noise_density =
+    dims::acceleration / nondim::pow(dims::frequency, rational{1, 2});
 
 inline constexpr problem<3> crack_fracture{
     "critical stress for a crack (rational dimension: Pa m^(1/2))",
@@ -250,13 +290,15 @@ constexpr problem_view view(const problem<N>& p) {
 
 /// \brief Every problem, in the order of `for_each_problem` (run-time use).
 inline constexpr std::array<problem_view, 28> all_problems{
-    view(sphere_drag),      view(pipe_pressure_drop),   view(ship_resistance), view(vortex_shedding),
-    view(pump_power),       view(weir_flow),            view(orifice_flow),    view(boundary_layer),
-    view(stokes_settling),  view(deep_water_wave),      view(sound_speed),     view(blast_wave),
-    view(capillary_rise),   view(drop_oscillation),     view(drag_without_density),
-    view(forced_convection), view(natural_convection),  view(transient_conduction), view(mass_transfer),
-    view(pendulum),         view(spring_mass),          view(spring_force),    view(kepler_orbit),
-    view(ideal_gas),        view(rc_circuit),           view(wire_resistance), view(crack_fracture),
+    view(sphere_drag),        view(pipe_pressure_drop), view(ship_resistance),
+    view(vortex_shedding),    view(pump_power),         view(weir_flow),
+    view(orifice_flow),       view(boundary_layer),     view(stokes_settling),
+    view(deep_water_wave),    view(sound_speed),        view(blast_wave),
+    view(capillary_rise),     view(drop_oscillation),   view(drag_without_density),
+    view(forced_convection),  view(natural_convection), view(transient_conduction),
+    view(mass_transfer),      view(pendulum),           view(spring_mass),
+    view(spring_force),       view(kepler_orbit),       view(ideal_gas),
+    view(rc_circuit),         view(wire_resistance),    view(crack_fracture),
     view(accelerometer_noise)};
 
 }  // namespace textbook

@@ -5,3 +5,4 @@
 /// scales for nondimensional solvers (`scales`).
 
 #include "pi_groups.hpp"
+#include "scales.hpp"

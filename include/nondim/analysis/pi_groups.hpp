@@ -43,23 +43,25 @@ namespace nondim {
 template <std::size_t N>
 struct compile_time_basis {
   bool overflow = false;
-  std::size_t rank = 0;                            ///< exact rank of the dimension matrix
-  std::size_t group_count = 0;                     ///< N - rank
-  bool dependent_repeating = false;                ///< the rank needed the dependent variable
-  std::array<std::size_t, N> repeating{};          ///< variable indices, in the order chosen
-  std::array<std::size_t, N> group_variable{};     ///< the non-repeating variable of group k
+  std::size_t rank = 0;                                    ///< exact rank of the dimension matrix
+  std::size_t group_count = 0;                             ///< N - rank
+  bool dependent_repeating = false;                        ///< the rank needed the dependent variable
+  std::array<std::size_t, N> repeating{};                  ///< variable indices, in the order chosen
+  std::array<std::size_t, N> group_variable{};             ///< the non-repeating variable of group k
   std::array<std::array<std::int64_t, N>, N> exponents{};  ///< group k's exponents, by variable
-  std::array<bool, N> isolated{};                  ///< variables that appear in no group
+  std::array<bool, N> isolated{};                          ///< variables that appear in no group
 };
 
 namespace detail {
 
 /// \brief Always `Ok`; its other arguments carry the dimensions or arguments into the
 /// diagnostic when a `static_assert` on it fails.
-template <bool Ok, class... Spelled> inline constexpr bool holds = Ok;
+template <bool Ok, class... Spelled>
+inline constexpr bool holds = Ok;
 
 /// Names a bad argument in compile errors: its 1-based position and its type.
-template <std::size_t Position, class T> struct not_a_quantity {};
+template <std::size_t Position, class T>
+struct not_a_quantity {};
 
 template <std::size_t N>
 consteval compile_time_basis<N> solve_pi_basis(const std::array<exponent_column, N>& col) {
@@ -175,8 +177,12 @@ constexpr double unrolled_power(double x) noexcept {
   }
 }
 
-constexpr std::int64_t positive_part(std::int64_t e) noexcept { return e > 0 ? e : 0; }
-constexpr std::int64_t negative_part(std::int64_t e) noexcept { return e < 0 ? -e : 0; }
+constexpr std::int64_t positive_part(std::int64_t e) noexcept {
+  return e > 0 ? e : 0;
+}
+constexpr std::int64_t negative_part(std::int64_t e) noexcept {
+  return e < 0 ? -e : 0;
+}
 
 /// \brief Value of group G of the constant `Exponents` over SI values `x`:
 /// (product of the positive powers, left to right) / (product of the negative ones).
@@ -228,7 +234,7 @@ template <dimension... D>
 constexpr auto pi_exponents() {
   constexpr auto& basis = detail::pi_basis_v<D...>;
   detail::pi_basis_fits<D...>();
-  static_assert(detail::holds<basis.overflow || basis.group_count != 0, detail::spell<D>...>,
+  static_assert(detail::holds<(basis.overflow || basis.group_count != 0), detail::spell<D>...>,
                 "nondim: these variables form no dimensionless group (as many variables as the rank of "
                 "their dimensions); a variable that carries a dimension is missing from the problem");
   constexpr std::size_t count = basis.overflow ? 0 : basis.group_count;
@@ -239,7 +245,8 @@ constexpr auto pi_exponents() {
 
 namespace detail {
 /// The exponents as a constant with static storage, so that its rows can be template arguments.
-template <dimension... D> inline constexpr auto group_exponents = pi_exponents<D...>();
+template <dimension... D>
+inline constexpr auto group_exponents = pi_exponents<D...>();
 }  // namespace detail
 
 /// \brief Values of the dimensionless groups of a solver's variables; the first argument is
