@@ -15,12 +15,14 @@
 /// elimination during constant evaluation; they are unique because the references'
 /// dimensions must be independent. They may be fractions when the span needs it:
 /// with g and L as references a velocity scales as (g L)^(1/2). Integer powers are unrolled
-/// multiplications; a power p/q takes the q-th root first (`std::sqrt`, `std::cbrt`, else
-/// `std::pow`), then the integer power p.
+/// multiplications; a power p/q takes the q-th root first, then the integer power p. Square
+/// and cube roots of the references are taken once, when the object is made (`std::sqrt`,
+/// `std::cbrt`); other roots (`std::pow`) at each call.
 ///
-/// Cost: the object stores the references' SI values; `scale<D>()` multiplies them each call
-/// (the same operations as the hand-written product, which the optimiser hoists out of a loop
-/// just as it would the hand-written one). `nondimensional(q)` is `q.si() / scale`,
+/// Cost: the object stores the references' SI values (and their square and cube roots);
+/// `scale<D>()` multiplies them at each call: the same operations as the hand-written product,
+/// which the optimiser hoists out of a loop just as it would the hand-written one
+/// (bench/pi_groups_bench.cpp measures both). `nondimensional(q)` is `q.si() / scale`,
 /// `dimensional<D>(x)` is `x * scale`: the round trip is exact when the scale is a power of
 /// two, and otherwise within one unit in the last place.
 ///
@@ -182,18 +184,6 @@ constexpr std::array<rational, sizeof...(R)> scale_exponents() {
   return sol.exponents;
 }
 
-/// x^(P/Q) for P >= 0, Q >= 1: the Q-th root, then the integer power by unrolled squaring.
-template <std::int64_t P, std::int64_t Q>
-constexpr double rational_power(double x) noexcept {
-  if constexpr (P == 0) {
-    return 1.0;
-  } else if constexpr (Q == 1) {
-    return unrolled_power<P>(x);
-  } else {
-    return unrolled_power<P>(root(x, Q));
-  }
-}
-
 template <class... Q>
 consteval std::size_t first_non_reference() {
   constexpr std::array<bool, sizeof...(Q)> ok{is_quantity<std::remove_cvref_t<Q>>::value...};
@@ -223,7 +213,13 @@ class reference_scales {
   static constexpr bool spans = detail::span_solution_v<D, R...>.in_span && !detail::span_solution_v<D, R...>.overflow;
 
   /// \brief From the references' values in coherent SI units, in the order of R.
-  constexpr explicit reference_scales(const std::array<double, size>& si_values) noexcept : values_(si_values) {}
+  /// Square and cube roots of the references are taken here, once, for scales with exponents p/2 and p/3.
+  constexpr explicit reference_scales(const std::array<double, size>& si_values) noexcept : values_(si_values) {
+    for (std::size_t i = 0; i < size; ++i) {
+      sqrt_[i] = detail::root(values_[i], 2);
+      cbrt_[i] = detail::root(values_[i], 3);
+    }
+  }
 
   /// \brief The exponents k with D = R1^k1 R2^k2 ..., exact; a compile error when D lies
   /// outside the span (naming the base dimension the references lack).
@@ -301,16 +297,35 @@ class reference_scales {
     constexpr bool any_positive = ((k[I].num > 0) || ...);
     constexpr bool any_negative = ((k[I].num < 0) || ...);
     if constexpr (!any_negative) {
-      return (1.0 * ... * detail::rational_power<detail::positive_part(k[I].num), k[I].den>(values_[I]));
+      return (1.0 * ... * power<detail::positive_part(k[I].num), k[I].den, I>());
     } else if constexpr (!any_positive) {
-      return 1.0 / (1.0 * ... * detail::rational_power<detail::negative_part(k[I].num), k[I].den>(values_[I]));
+      return 1.0 / (1.0 * ... * power<detail::negative_part(k[I].num), k[I].den, I>());
     } else {
-      return (1.0 * ... * detail::rational_power<detail::positive_part(k[I].num), k[I].den>(values_[I])) /
-             (1.0 * ... * detail::rational_power<detail::negative_part(k[I].num), k[I].den>(values_[I]));
+      return (1.0 * ... * power<detail::positive_part(k[I].num), k[I].den, I>()) /
+             (1.0 * ... * power<detail::negative_part(k[I].num), k[I].den, I>());
+    }
+  }
+
+  /// Reference I to the power P/Q (P >= 0): the stored root for Q = 2 or 3, a root taken now
+  /// for other Q, then the integer power by unrolled squaring.
+  template <std::int64_t P, std::int64_t Q, std::size_t I>
+  constexpr double power() const noexcept {
+    if constexpr (P == 0) {
+      return 1.0;
+    } else if constexpr (Q == 1) {
+      return detail::unrolled_power<P>(values_[I]);
+    } else if constexpr (Q == 2) {
+      return detail::unrolled_power<P>(sqrt_[I]);
+    } else if constexpr (Q == 3) {
+      return detail::unrolled_power<P>(cbrt_[I]);
+    } else {
+      return detail::unrolled_power<P>(detail::root(values_[I], Q));
     }
   }
 
   std::array<double, size> values_;
+  std::array<double, size> sqrt_{};
+  std::array<double, size> cbrt_{};
 };
 
 /// \brief Reference scales from reference quantities with independent dimensions.
