@@ -33,7 +33,7 @@ area = d(L=2)
 K_Ic = d(L=Rational(-1, 2), M=1, T=-2)
 noise = d(L=1, T=Rational(-3, 2))
 
-problems = {
+problems = {  # the names of tests/textbook_problems.hpp
     "sphere_drag": [force, density, velocity, length, mu],
     "pipe_pressure_drop": [pressure, density, velocity, length, mu, length, length],
     "ship_resistance": [force, density, velocity, length, mu, accel],
@@ -76,14 +76,17 @@ def basis(cols):
             rep.append(j)
     if rank([cols[i] for i in rep] + [cols[0]]) > len(rep):
         rep.append(0)
-    A = Matrix.hstack(*[Matrix(cols[i]) for i in rep])
+    A = Matrix.hstack(*[Matrix(cols[i]) for i in rep]) if rep else None
     groups = []
     for j in range(n):
         if j in rep:
             continue
-        # A x = -col_j, exact (A has full column rank)
-        x = (A.T * A).inv() * A.T * (-Matrix(cols[j]))
-        assert A * x == -Matrix(cols[j])
+        if A is None:  # every variable is dimensionless
+            x = []
+        else:
+            # A x = -col_j, exact (A has full column rank)
+            x = (A.T * A).inv() * A.T * (-Matrix(cols[j]))
+            assert A * x == -Matrix(cols[j])
         v = [Rational(0)] * n
         v[j] = Rational(1)
         for i, r in enumerate(rep):
@@ -94,6 +97,7 @@ def basis(cols):
         groups.append([e // g for e in ints])
     return rep, groups
 
-for name, cols in problems.items():
-    rep, groups = basis(cols)
-    print(f"{name}: rank {len(rep)}, repeating {rep}, groups {groups}")
+if __name__ == "__main__":
+    for name, cols in problems.items():
+        rep, groups = basis(cols)
+        print(f"{name}: rank {len(rep)}, repeating {rep}, groups {groups}")
