@@ -7,7 +7,7 @@ C++ program that prints pi_basis<...>() for each; the rule of DESIGN.md is appli
 same lists with sympy's exact rationals (classical_basis.py) and the two must agree on the
 rank, the repeating variables in the order chosen, and every group's exponents.
 
-  python3 tests/sympy/random_agreement.py --cxx g++ --include include [--count 60] [--seed 11]
+  python3 tests/sympy/random_agreement.py --cxx g++ --include include [--count 60] [--rng 11]
 """
 import argparse
 import importlib.util
@@ -50,10 +50,10 @@ def main():
     ap.add_argument("--cxx", default="g++")
     ap.add_argument("--include", required=True)
     ap.add_argument("--count", type=int, default=60)
-    ap.add_argument("--seed", type=int, default=11)
+    ap.add_argument("--rng", type=int, default=11, help="fixes the random problems")
     args = ap.parse_args()
 
-    rng = random.Random(args.seed)
+    rng = random.Random(args.rng)
     problems = [random_problem(rng) for _ in range(args.count)]
     src = [
         "#include <nondim/analysis/compile_time.hpp>",
