@@ -101,6 +101,8 @@ inline constexpr std::array unit_table{
     detail::si("Pa", "pascal", dims::pressure, detail::brochure_t4),
     detail::si("J", "joule", dims::energy, detail::brochure_t4),
     detail::si("W", "watt", dims::power, detail::brochure_t4),
+    // watt hour (kWh, MWh): NIST SP 811 (2008) B.9, "kilowatt hour: 3.6 E+06 J"
+    unit_entry{"Wh", "watt hour", 3600.0, dims::energy, true, detail::no_decade, 0.0, detail::nist_b9},
     detail::si("C", "coulomb", dims::electric_charge, detail::brochure_t4),
     detail::si("V", "volt", dims::voltage, detail::brochure_t4),
     detail::si("F", "farad", dims::capacitance, detail::brochure_t4),
@@ -213,15 +215,58 @@ struct resolved_symbol {
   double factor;               ///< entry factor times the prefix, exact for decade units
 };
 
+namespace detail {
+
+/// One key of the symbol index: a table symbol or an alias, and the entry it names.
+struct symbol_key {
+  std::string_view key;
+  std::size_t entry;
+};
+
+constexpr std::size_t table_position(std::string_view symbol) {
+  for (std::size_t i = 0; i < unit_table.size(); ++i)
+    if (unit_table[i].symbol == symbol) return i;
+  throw "nondim: an alias names a symbol missing from the unit table";  // a compile error
+}
+
+/// Every symbol and alias, sorted, so a lookup is a binary search (a few comparisons of
+/// short strings) instead of a scan. Built once at compile time; a duplicate key is a
+/// compile error, so "symbols are unique" is checked, not assumed.
+constexpr std::array<symbol_key, unit_table.size() + unit_aliases.size()> make_symbol_index() {
+  std::array<symbol_key, unit_table.size() + unit_aliases.size()> index{};
+  for (std::size_t i = 0; i < unit_table.size(); ++i) index[i] = symbol_key{unit_table[i].symbol, i};
+  for (std::size_t i = 0; i < unit_aliases.size(); ++i)
+    index[unit_table.size() + i] = symbol_key{unit_aliases[i].alias, table_position(unit_aliases[i].symbol)};
+  for (std::size_t i = 1; i < index.size(); ++i) {  // insertion sort: ~100 keys, compile time only
+    const symbol_key k = index[i];
+    std::size_t j = i;
+    for (; j > 0 && k.key < index[j - 1].key; --j) index[j] = index[j - 1];
+    index[j] = k;
+  }
+  for (std::size_t i = 1; i < index.size(); ++i)
+    if (index[i].key == index[i - 1].key) throw "nondim: a unit symbol or alias appears twice in the unit table";
+  return index;
+}
+
+inline constexpr auto symbol_index = make_symbol_index();
+
+}  // namespace detail
+
 /// \brief The table entry with exactly this symbol (after aliases), or null.
 constexpr const unit_entry* find_unit_entry(std::string_view symbol) noexcept {
-  for (const auto& a : unit_aliases)
-    if (a.alias == symbol) {
-      symbol = a.symbol;
-      break;
+  std::size_t lo = 0;
+  std::size_t hi = detail::symbol_index.size();
+  while (lo < hi) {
+    const std::size_t mid = lo + (hi - lo) / 2;
+    const std::string_view k = detail::symbol_index[mid].key;
+    if (k < symbol) {
+      lo = mid + 1;
+    } else if (symbol < k) {
+      hi = mid;
+    } else {
+      return &unit_table[detail::symbol_index[mid].entry];
     }
-  for (const auto& e : unit_table)
-    if (e.symbol == symbol) return &e;
+  }
   return nullptr;
 }
 
@@ -231,7 +276,8 @@ constexpr std::optional<resolved_symbol> resolve_unit_symbol(std::string_view sy
   const prefix_entry* best = nullptr;
   const unit_entry* best_unit = nullptr;
   for (const auto& p : prefix_table) {
-    if (symbol.size() <= p.symbol.size() || symbol.substr(0, p.symbol.size()) != p.symbol) continue;
+    if (symbol.size() <= p.symbol.size() || symbol[0] != p.symbol[0] || symbol.substr(0, p.symbol.size()) != p.symbol)
+      continue;
     const unit_entry* u = find_unit_entry(symbol.substr(p.symbol.size()));
     if (u == nullptr || !u->prefixable) continue;
     if (best == nullptr || p.symbol.size() > best->symbol.size()) {
