@@ -138,9 +138,10 @@ TEST_SUITE("parse_errors") {
     check_fault("(m^4611686018427387904)^2", unit_error_kind::exponent_overflow, 24);
     // -2^63 is refused too, so every exponent can be negated when printed
     check_fault("m^-9223372036854775807/m", unit_error_kind::exponent_overflow, 24);
-    check_fault("m\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079"
-                "\u2079\u2079\u2079\u2079\u2079",
-                unit_error_kind::exponent_overflow, 2);
+    check_fault(
+        "m\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079\u2079"
+        "\u2079\u2079\u2079\u2079\u2079",
+        unit_error_kind::exponent_overflow, 2);
     // a large fraction that still reduces is fine
     CHECK(parse_unit("m^(9223372036854775806/9223372036854775806)").dim == dims::length);
   }
@@ -153,10 +154,10 @@ TEST_SUITE("parse_errors") {
 
   TEST_CASE("invalid UTF-8") {
     check_fault("m\xff", unit_error_kind::invalid_utf8, 2, "0xFF");
-    check_fault("\xc0\xaf", unit_error_kind::invalid_utf8, 1);          // overlong '/'
-    check_fault("\u00b5m\xc2", unit_error_kind::invalid_utf8, 3);       // truncated after µm
+    check_fault("\xc0\xaf", unit_error_kind::invalid_utf8, 1);             // overlong '/'
+    check_fault("\u00b5m\xc2", unit_error_kind::invalid_utf8, 3);          // truncated after µm
     check_fault("m\u00b7\xed\xa0\x80", unit_error_kind::invalid_utf8, 3);  // a UTF-16 surrogate
-    check_fault("\xf4\x90\x80\x80", unit_error_kind::invalid_utf8, 1);  // beyond U+10FFFF
+    check_fault("\xf4\x90\x80\x80", unit_error_kind::invalid_utf8, 1);     // beyond U+10FFFF
     check_fault("\x80", unit_error_kind::invalid_utf8, 1);
   }
 

@@ -61,10 +61,11 @@ TEST_SUITE("parse_quantity") {
   }
 
   TEST_CASE("convert scales numbers between units of one dimension") {
-    CHECK(convert(1.0, "psi", "kPa") == doctest::Approx(6.894757).epsilon(5e-8));  // NIST SP 811 B.9: psi to kPa, 6.894 757
+    CHECK(convert(1.0, "psi", "kPa") ==
+          doctest::Approx(6.894757).epsilon(5e-8));  // NIST SP 811 B.9: psi to kPa, 6.894 757
     CHECK(convert(1.0, "mi/h", "km/h") == doctest::Approx(1.609344).epsilon(1e-15));  // NIST SP 811 B.8, exact
     CHECK(convert(1.0, "lbf*ft", "N*m") == doctest::Approx(1.355818).epsilon(5e-7));  // NIST SP 811 B.8
-    CHECK(convert(1.0, "atm", "bar") == 1.01325);                                   // NIST SP 811 B.8, exact
+    CHECK(convert(1.0, "atm", "bar") == 1.01325);                                     // NIST SP 811 B.8, exact
     // NIST SP 811 B.8: Btu_IT/(h ft^2 degF) = 5.678 263 E+00 W/(m^2 K)
     CHECK(convert(1.0, "Btu/(h*ft^2*degF)", "W/(m^2*K)") == doctest::Approx(5.678263).epsilon(1e-7));
     CHECK(convert(2.5, "m", "m") == 2.5);
@@ -77,7 +78,7 @@ TEST_SUITE("parse_quantity") {
       FAIL("no exception");
     } catch (const dimension_error& e) {
       const std::string what = e.what();
-      CHECK(what.find("L T^-1") != std::string::npos);     // dimension of m/s
+      CHECK(what.find("L T^-1") != std::string::npos);       // dimension of m/s
       CHECK(what.find("L^-1 M T^-2") != std::string::npos);  // dimension of Pa (ISO 80000-1 order)
       CHECK(e.expected() == dims::pressure);
       CHECK(e.actual() == dims::velocity);
@@ -98,7 +99,7 @@ TEST_SUITE("parse_quantity") {
     CHECK(parse_quantity("\u22121 km").value == -1000.0);  // U+2212 minus sign
     CHECK(parse_quantity(".5 m").value == 0.5);
     CHECK(parse_quantity("5m").value == 5.0);
-    CHECK(parse_quantity("2\u2009kg").value == 2.0);  // thin space (SI Brochure 9th ed., 5.4.3)
+    CHECK(parse_quantity("2\u2009kg").value == 2.0);        // thin space (SI Brochure 9th ed., 5.4.3)
     const parsed_quantity pure = parse_quantity(" 0.71 ");  // a Prandtl number, dimensionless
     CHECK(pure.value == 0.71);
     CHECK(pure.dim == dims::dimensionless);

@@ -219,7 +219,9 @@ const published table[] = {
 }  // namespace
 
 TEST_SUITE("parse_unit") {
-  TEST_CASE("the table holds at least 80 published expressions") { CHECK(std::size(table) >= 80); }
+  TEST_CASE("the table holds at least 80 published expressions") {
+    CHECK(std::size(table) >= 80);
+  }
 
   TEST_CASE("every published expression parses to its factor and dimension") {
     for (const auto& p : table) {

@@ -55,13 +55,14 @@ inline parsed_quantity parse_quantity(std::string_view text) {
     i += s.len;
   }
   const auto first = detail::classify_at(text, i, e).cls;
-  const bool starts_number = first == detail::char_class::digit ||
-                             (first == detail::char_class::dot &&
-                              detail::classify_at(text, i + 1, e).cls == detail::char_class::digit);
+  const bool starts_number =
+      first == detail::char_class::digit ||
+      (first == detail::char_class::dot && detail::classify_at(text, i + 1, e).cls == detail::char_class::digit);
   if (!starts_number) {
     if (i == e) detail::bad_number(text, i, "expected a number, found the end of the text");
-    detail::bad_number(text, i, "expected a number at the start of a quantity (\"1.8e-5 Pa*s\"), found " +
-                                    detail::quote_token(text.substr(i, detail::classify_at(text, i, e).len)));
+    detail::bad_number(text, i,
+                       "expected a number at the start of a quantity (\"1.8e-5 Pa*s\"), found " +
+                           detail::quote_token(text.substr(i, detail::classify_at(text, i, e).len)));
   }
   double x = 0.0;
   const auto [end_of_number, ec] = std::from_chars(text.data() + i, text.data() + e, x, std::chars_format::general);
@@ -90,7 +91,8 @@ inline parsed_quantity parse_quantity(std::string_view text) {
 template <dimension D>
 quantity<D> parse_quantity(std::string_view text) {
   const parsed_quantity q = parse_quantity(text);
-  if (q.dim != D) throw dimension_error("nondim: `" + std::string(text.substr(0, 80)) + "` has the wrong dimension", D, q.dim);
+  if (q.dim != D)
+    throw dimension_error("nondim: `" + std::string(text.substr(0, 80)) + "` has the wrong dimension", D, q.dim);
   return quantity<D>::from_si(q.value);
 }
 

@@ -250,22 +250,32 @@ constexpr std::array<symbol_key, unit_table.size() + unit_aliases.size()> make_s
 
 inline constexpr auto symbol_index = make_symbol_index();
 
+/// For each first byte, the range of `symbol_index` whose keys start with it (the index is
+/// sorted, so they are contiguous): a lookup compares a handful of keys at most.
+struct symbol_bucket {
+  std::uint16_t begin;
+  std::uint16_t end;
+};
+constexpr std::array<symbol_bucket, 256> make_symbol_buckets() {
+  std::array<symbol_bucket, 256> buckets{};
+  for (std::size_t i = symbol_index.size(); i-- > 0;) {
+    const auto b = static_cast<unsigned char>(symbol_index[i].key[0]);
+    if (buckets[b].end == 0) buckets[b].end = static_cast<std::uint16_t>(i + 1);
+    buckets[b].begin = static_cast<std::uint16_t>(i);
+  }
+  return buckets;
+}
+inline constexpr auto symbol_buckets = make_symbol_buckets();
+
 }  // namespace detail
 
 /// \brief The table entry with exactly this symbol (after aliases), or null.
 constexpr const unit_entry* find_unit_entry(std::string_view symbol) noexcept {
-  std::size_t lo = 0;
-  std::size_t hi = detail::symbol_index.size();
-  while (lo < hi) {
-    const std::size_t mid = lo + (hi - lo) / 2;
-    const std::string_view k = detail::symbol_index[mid].key;
-    if (k < symbol) {
-      lo = mid + 1;
-    } else if (symbol < k) {
-      hi = mid;
-    } else {
-      return &unit_table[detail::symbol_index[mid].entry];
-    }
+  if (symbol.empty()) return nullptr;
+  const detail::symbol_bucket b = detail::symbol_buckets[static_cast<unsigned char>(symbol[0])];
+  for (std::size_t i = b.begin; i < b.end; ++i) {
+    const std::string_view k = detail::symbol_index[i].key;
+    if (k.size() == symbol.size() && k == symbol) return &unit_table[detail::symbol_index[i].entry];
   }
   return nullptr;
 }

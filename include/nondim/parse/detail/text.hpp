@@ -11,7 +11,9 @@
 
 namespace nondim::detail {
 
-constexpr unsigned byte_at(std::string_view s, std::size_t i) noexcept { return static_cast<unsigned char>(s[i]); }
+constexpr unsigned byte_at(std::string_view s, std::size_t i) noexcept {
+  return static_cast<unsigned char>(s[i]);
+}
 
 /// Length of the well-formed UTF-8 sequence that starts at byte `i`, or 0 when it is not
 /// one (stray continuation, overlong form, surrogate, beyond U+10FFFF, truncated).
@@ -89,10 +91,10 @@ enum class char_class : std::uint8_t {
   other,        ///< has no place in a unit expression
 };
 
-struct char_info {
+struct char_info {  // small enough to travel in a register
   char_class cls;
-  std::size_t len;  ///< bytes
-  int value;        ///< superscript digit 0..9, -1 for ⁻, -2 for ⁺; otherwise 0
+  std::uint8_t len;   ///< bytes
+  std::int8_t value;  ///< superscript digit 0..9, -1 for ⁻, -2 for ⁺; otherwise 0
 };
 
 constexpr std::array<char_class, 128> make_ascii_classes() {
@@ -115,7 +117,7 @@ constexpr std::array<char_class, 128> make_ascii_classes() {
 }
 inline constexpr auto ascii_classes = make_ascii_classes();
 
-constexpr char_info classify_code_point(char32_t cp, std::size_t len) noexcept {
+constexpr char_info classify_code_point(char32_t cp, std::uint8_t len) noexcept {
   switch (cp) {
     case 0x00B7:  // middle dot
     case 0x22C5:  // dot operator
@@ -145,19 +147,25 @@ constexpr char_info classify_code_point(char32_t cp, std::size_t len) noexcept {
     default:
       break;
   }
-  if (cp >= 0x2074 && cp <= 0x2079) return {char_class::superscript, len, static_cast<int>(cp - 0x2070)};
+  if (cp >= 0x2074 && cp <= 0x2079) return {char_class::superscript, len, static_cast<std::int8_t>(cp - 0x2070)};
   if (cp >= 0x2000 && cp <= 0x200A) return {char_class::space, len, 0};
   if (cp < 0xA0) return {char_class::other, len, 0};  // C1 controls
-  return {char_class::letter, len, 0};  // µ, μ, Ω, Å, °, ℃ ... (a symbol decides)
+  return {char_class::letter, len, 0};                // µ, μ, Ω, Å, °, ℃ ... (a symbol decides)
+}
+
+/// The class of a non-ASCII character (kept out of line: the ASCII path is the hot one).
+[[gnu::noinline]] inline char_info classify_non_ascii(std::string_view s, std::size_t i) noexcept {
+  const std::size_t n = utf8_length(s, i);
+  return classify_code_point(utf8_decode(s, i, n), static_cast<std::uint8_t>(n));
 }
 
 /// The class of the character at byte `i` of a text already checked to be UTF-8.
-constexpr char_info classify_at(std::string_view s, std::size_t i, std::size_t end) noexcept {
+[[gnu::always_inline]] inline char_info classify_at(std::string_view s, std::size_t i, std::size_t end) noexcept {
   if (i >= end) return {char_class::end, 0, 0};
   const unsigned b = byte_at(s, i);
-  if (b < 0x80U) return {ascii_classes[b], 1, 0};
-  const std::size_t n = utf8_length(s, i);
-  return classify_code_point(utf8_decode(s, i, n), n);
+  if (b < 0x80U) [[likely]]
+    return {ascii_classes[b], 1, 0};
+  return classify_non_ascii(s, i);
 }
 
 /// A token quoted for a message: control characters as U+XXXX, long tokens cut.

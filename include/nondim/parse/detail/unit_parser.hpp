@@ -49,15 +49,16 @@ struct unit_value {
   double scale = 1.0;
 };
 
-[[noreturn]] inline void exponent_overflows() { throw rational_overflow("nondim: exponent overflows 64 bits"); }
+[[noreturn]] inline void exponent_overflows() {
+  throw rational_overflow("nondim: exponent overflows 64 bits");
+}
 
 // Exponent arithmetic with an integer fast path. INT64_MIN is refused as well, so every
 // exponent can be negated (printing a denominator needs that).
 inline rational exponent_product(const rational& a, const rational& b) {
   if (a.den == 1 && b.den == 1) {
     std::int64_t r = 0;
-    if (__builtin_mul_overflow(a.num, b.num, &r) || r == std::numeric_limits<std::int64_t>::min())
-      exponent_overflows();
+    if (__builtin_mul_overflow(a.num, b.num, &r) || r == std::numeric_limits<std::int64_t>::min()) exponent_overflows();
     return rational{r};
   }
   const rational r = a * b;
@@ -104,7 +105,9 @@ inline double raise(double s, const rational& p) {
 }
 
 /// A factor to SI that a double holds without loss of range.
-inline bool usable_factor(double f) noexcept { return std::isfinite(f) && f >= DBL_MIN; }
+inline bool usable_factor(double f) noexcept {
+  return std::isfinite(f) && f >= DBL_MIN;
+}
 
 /// Text of an expression for a message: shown when short and printable.
 inline std::string describe_text(std::string_view text) {
@@ -310,7 +313,8 @@ class unit_parser {
     const std::string_view symbol = span(b, pos_);
     const auto r = resolve_unit_symbol(symbol);
     if (!r)
-      fail(unit_error_kind::unknown_symbol, b, "unknown unit symbol " + quote_token(symbol) + unknown_symbol_hint(symbol));
+      fail(unit_error_kind::unknown_symbol, b,
+           "unknown unit symbol " + quote_token(symbol) + unknown_symbol_hint(symbol));
     const unit_entry& e = *r->entry;
     f.exps = e.dim.exponents;
     const int prefix = r->prefix != nullptr ? r->prefix->exponent : 0;
@@ -343,9 +347,8 @@ class unit_parser {
     }
     const std::string_view number = span(b, pos_);
     if (number == "1") return;
-    std::string why = "a number is not a unit: " + quote_token(number) +
-                      "; give values to parse_quantity (\"" + std::string(number.substr(0, 24)) +
-                      " m\") and scales as SI prefixes (`km`, `mPa`)";
+    std::string why = "a number is not a unit: " + quote_token(number) + "; give values to parse_quantity (\"" +
+                      std::string(number.substr(0, 24)) + " m\") and scales as SI prefixes (`km`, `mPa`)";
     std::size_t k = b;  // "m^2/3": a fraction meant as the power
     while (k > begin_ && (text_[k - 1] == ' ' || text_[k - 1] == '\t')) --k;
     if (k > begin_ && text_[k - 1] == '/' && k >= begin_ + 2 && text_[k - 2] >= '0' && text_[k - 2] <= '9')
@@ -408,9 +411,9 @@ class unit_parser {
   /// After `^` or `**` at `op`: an integer, a decimal, or `(p/q)`, each signed.
   rational read_exponent(std::size_t op) {
     const char_info c = at(pos_);
-    const std::string op_text = quote_token(span(op, op + (text_[op] == '^' ? 1 : 2)));
+    const std::string_view op_text = span(op, op + (text_[op] == '^' ? 1 : 2));
     if (c.cls == char_class::end || c.cls == char_class::close)
-      fail(unit_error_kind::dangling_operator, op, op_text + " has no exponent after it");
+      fail(unit_error_kind::dangling_operator, op, quote_token(op_text) + " has no exponent after it");
     if (c.cls != char_class::open) return read_decimal(op_text);
     const std::size_t open = pos_;
     ++pos_;
@@ -427,12 +430,14 @@ class unit_parser {
         std::size_t e = pos_;
         while (at(e).cls != char_class::end && at(e).cls != char_class::close) e += at(e).len;
         if (at(e).cls == char_class::close) ++e;
-        fail(unit_error_kind::zero_denominator, den_begin, "zero denominator in the exponent " + quote_token(span(open, e)));
+        fail(unit_error_kind::zero_denominator, den_begin,
+             "zero denominator in the exponent " + quote_token(span(open, e)));
       }
       skip_spaces();
     }
     const char_info d = at(pos_);
-    if (d.cls == char_class::end) fail(unit_error_kind::unbalanced_parenthesis, open, "`(` of the exponent is never closed");
+    if (d.cls == char_class::end)
+      fail(unit_error_kind::unbalanced_parenthesis, open, "`(` of the exponent is never closed");
     if (d.cls != char_class::close)
       fail(unit_error_kind::bad_exponent, pos_,
            "expected `)` to close the exponent, found " + quote_token(token_at(pos_)));
@@ -442,7 +447,7 @@ class unit_parser {
   }
 
   /// A signed integer or exact decimal: `-2`, `0.5` (1/2), `0.333` (333/1000).
-  rational read_decimal(const std::string& op_text) {
+  rational read_decimal(std::string_view op_text) {
     const std::size_t b = pos_;
     bool negative = false;
     if (const char_info s = at(pos_); s.cls == char_class::minus || s.cls == char_class::plus) {
@@ -451,10 +456,10 @@ class unit_parser {
     }
     if (at(pos_).cls != char_class::digit) {
       if (at(pos_).cls == char_class::end)
-        fail(unit_error_kind::dangling_operator, b, op_text + " has an unfinished exponent");
+        fail(unit_error_kind::dangling_operator, b, quote_token(op_text) + " has an unfinished exponent");
       fail(unit_error_kind::bad_exponent, pos_,
-           "expected an exponent after " + op_text + " (an integer, a decimal such as `0.5`, or `(1/2)`), found " +
-               quote_token(token_at(pos_)));
+           "expected an exponent after " + quote_token(op_text) +
+               " (an integer, a decimal such as `0.5`, or `(1/2)`), found " + quote_token(token_at(pos_)));
     }
     std::int64_t num = 0;
     std::int64_t den = 1;
@@ -583,17 +588,17 @@ inline void check_unit_text(std::string_view text) {
   if (text.size() > max_unit_text_bytes) {
     const std::size_t column = column_of(text, max_unit_text_bytes);
     throw unit_error(unit_error_kind::too_long, column,
-                     "nondim: the text is longer than " + std::to_string(max_unit_text_bytes) +
-                         " bytes (column " + std::to_string(column) + " is past the limit)");
+                     "nondim: the text is longer than " + std::to_string(max_unit_text_bytes) + " bytes (column " +
+                         std::to_string(column) + " is past the limit)");
   }
   const std::size_t bad = first_invalid_utf8(text);
   if (bad != text.size()) {
     static constexpr std::string_view hex = "0123456789ABCDEF";
     const unsigned b = byte_at(text, bad);
     const std::size_t column = column_of(text, bad);
-    throw unit_error(unit_error_kind::invalid_utf8, column,
-                     "nondim: invalid UTF-8 at column " + std::to_string(column) + " (byte 0x" + hex[b >> 4U] +
-                         hex[b & 0xFU] + ")");
+    throw unit_error(
+        unit_error_kind::invalid_utf8, column,
+        "nondim: invalid UTF-8 at column " + std::to_string(column) + " (byte 0x" + hex[b >> 4U] + hex[b & 0xFU] + ")");
   }
 }
 
