@@ -269,36 +269,50 @@ inline constexpr auto symbol_buckets = make_symbol_buckets();
 
 }  // namespace detail
 
-/// \brief The table entry with exactly this symbol (after aliases), or null.
-constexpr const unit_entry* find_unit_entry(std::string_view symbol) noexcept {
-  if (symbol.empty()) return nullptr;
+/// \brief Position in `unit_table` of the entry with exactly this symbol (after aliases), or
+/// `unit_table.size()` when there is none.
+///
+/// Compile-time callers use positions, not pointers: GCC 12 with -fsanitize=undefined
+/// cannot compare the address of a table element with null in a constant expression.
+constexpr std::size_t find_unit_position(std::string_view symbol) noexcept {
+  if (symbol.empty()) return unit_table.size();
   const detail::symbol_bucket b = detail::symbol_buckets[static_cast<unsigned char>(symbol[0])];
   for (std::size_t i = b.begin; i < b.end; ++i) {
     const std::string_view k = detail::symbol_index[i].key;
-    if (k.size() == symbol.size() && k == symbol) return &unit_table[detail::symbol_index[i].entry];
+    if (k.size() == symbol.size() && k == symbol) return detail::symbol_index[i].entry;
   }
-  return nullptr;
+  return unit_table.size();
+}
+
+/// \brief The table entry with exactly this symbol (after aliases), or null.
+constexpr const unit_entry* find_unit_entry(std::string_view symbol) noexcept {
+  const std::size_t i = find_unit_position(symbol);
+  return i < unit_table.size() ? &unit_table[i] : nullptr;
 }
 
 /// \brief Resolve a symbol by the rules at the top of this file; empty when unknown.
 constexpr std::optional<resolved_symbol> resolve_unit_symbol(std::string_view symbol) noexcept {
-  if (const unit_entry* e = find_unit_entry(symbol)) return resolved_symbol{e, nullptr, e->factor};
-  const prefix_entry* best = nullptr;
-  const unit_entry* best_unit = nullptr;
-  for (const auto& p : prefix_table) {
+  if (const std::size_t e = find_unit_position(symbol); e < unit_table.size())
+    return resolved_symbol{&unit_table[e], nullptr, unit_table[e].factor};
+  std::size_t best = prefix_table.size();
+  std::size_t best_unit = unit_table.size();
+  for (std::size_t i = 0; i < prefix_table.size(); ++i) {
+    const prefix_entry& p = prefix_table[i];
     if (symbol.size() <= p.symbol.size() || symbol[0] != p.symbol[0] || symbol.substr(0, p.symbol.size()) != p.symbol)
       continue;
-    const unit_entry* u = find_unit_entry(symbol.substr(p.symbol.size()));
-    if (u == nullptr || !u->prefixable) continue;
-    if (best == nullptr || p.symbol.size() > best->symbol.size()) {
-      best = &p;
+    const std::size_t u = find_unit_position(symbol.substr(p.symbol.size()));
+    if (u == unit_table.size() || !unit_table[u].prefixable) continue;
+    if (best == prefix_table.size() || p.symbol.size() > prefix_table[best].symbol.size()) {
+      best = i;
       best_unit = u;
     }
   }
-  if (best == nullptr) return std::nullopt;
-  const double f = best_unit->decade != detail::no_decade ? detail::pow10(best_unit->decade + best->exponent)
-                                                          : best_unit->factor * detail::pow10(best->exponent);
-  return resolved_symbol{best_unit, best, f};
+  if (best == prefix_table.size()) return std::nullopt;
+  const unit_entry& unit = unit_table[best_unit];
+  const prefix_entry& prefix = prefix_table[best];
+  const double f = unit.decade != detail::no_decade ? detail::pow10(unit.decade + prefix.exponent)
+                                                    : unit.factor * detail::pow10(prefix.exponent);
+  return resolved_symbol{&unit, &prefix, f};
 }
 
 }  // namespace nondim
