@@ -23,8 +23,8 @@ using namespace nondim;
 
 struct double_fields {
   std::span<const double> rho, u, mu, k, cp, t_wall, t_fluid;  // kg/m³, m/s, Pa·s, W/(m·K), J/(kg·K), K, K
-  double d_h;                                                   // m
-  std::span<double> q, re, nu;                                  // W/m², 1, 1
+  double d_h;                                                  // m
+  std::span<double> q, re, nu;                                 // W/m², 1, 1
 };
 
 [[gnu::noinline]] inline void heat_kernel_double(const double_fields& f) {
@@ -80,8 +80,8 @@ struct quantity_fields {
     const auto re = f.rho[i] * f.u[i] * d_h / f.mu[i];  // quantity<dimensionless>: checked at compile time
     const auto pr = f.cp[i] * f.mu[i] / f.k[i];
     const auto nu = 0.023 * pow<4, 5>(re) * pow<2, 5>(pr);
-    const auto h = nu * f.k[i] / d_h;                    // quantity<heat_transfer_coefficient>
-    f.q[i] = h * (f.t_wall[i] - f.t_fluid[i]);           // a difference of two absolute temperatures
+    const auto h = nu * f.k[i] / d_h;           // quantity<heat_transfer_coefficient>
+    f.q[i] = h * (f.t_wall[i] - f.t_fluid[i]);  // a difference of two absolute temperatures
     f.re[i] = re;
     f.nu[i] = nu;
   }
@@ -123,11 +123,10 @@ struct cell_data {
   std::vector<double> rho, u, mu, k, cp, t_wall, t_fluid, q, re, nu;
   double d_h = 0.02;  // 20 mm tube
 
-  explicit cell_data(std::size_t n)
-      : rho(n), u(n), mu(n), k(n), cp(n), t_wall(n), t_fluid(n), q(n), re(n), nu(n) {
+  explicit cell_data(std::size_t n) : rho(n), u(n), mu(n), k(n), cp(n), t_wall(n), t_fluid(n), q(n), re(n), nu(n) {
     lcg r(20240611U);
     for (std::size_t i = 0; i < n; ++i) {
-      rho[i] = 990.0 + 10.0 * r.next();      // liquid water near 300-320 K
+      rho[i] = 990.0 + 10.0 * r.next();  // liquid water near 300-320 K
       u[i] = 0.5 + 2.5 * r.next();
       mu[i] = 0.6e-3 + 0.4e-3 * r.next();
       k[i] = 0.60 + 0.04 * r.next();
@@ -137,9 +136,7 @@ struct cell_data {
     }
   }
 
-  [[nodiscard]] double_fields as_double() {
-    return {rho, u, mu, k, cp, t_wall, t_fluid, d_h, q, re, nu};
-  }
+  [[nodiscard]] double_fields as_double() { return {rho, u, mu, k, cp, t_wall, t_fluid, d_h, q, re, nu}; }
 };
 
 /// The same cells held as quantities (built from the SI values, so both kernels see equal bits).
@@ -155,8 +152,16 @@ struct quantity_cell_data {
   std::vector<quantity<dims::dimensionless>> re, nu;
 
   explicit quantity_cell_data(const cell_data& c)
-      : rho(c.rho.size()), u(c.rho.size()), mu(c.rho.size()), k(c.rho.size()), cp(c.rho.size()),
-        t_wall(c.rho.size()), t_fluid(c.rho.size()), d_h(c.d_h * units::m), q(c.rho.size()), re(c.rho.size()),
+      : rho(c.rho.size()),
+        u(c.rho.size()),
+        mu(c.rho.size()),
+        k(c.rho.size()),
+        cp(c.rho.size()),
+        t_wall(c.rho.size()),
+        t_fluid(c.rho.size()),
+        d_h(c.d_h * units::m),
+        q(c.rho.size()),
+        re(c.rho.size()),
         nu(c.rho.size()) {
     for (std::size_t i = 0; i < c.rho.size(); ++i) {
       rho[i] = c.rho[i] * (units::kg / units::m3);
@@ -169,9 +174,7 @@ struct quantity_cell_data {
     }
   }
 
-  [[nodiscard]] quantity_fields as_quantity() {
-    return {rho, u, mu, k, cp, t_wall, t_fluid, d_h, q, re, nu};
-  }
+  [[nodiscard]] quantity_fields as_quantity() { return {rho, u, mu, k, cp, t_wall, t_fluid, d_h, q, re, nu}; }
 };
 
 }  // namespace nondim_bench

@@ -116,10 +116,26 @@ void bm_ratio(benchmark::State& state) {
 constexpr std::int64_t small_n = 100'000;
 constexpr std::int64_t large_n = 1'000'000;
 
-BENCHMARK(bm_double<heat_kernel_double>)->Name("kernel_double")->Arg(small_n)->Arg(large_n)->Unit(benchmark::kMillisecond);
-BENCHMARK(bm_quantity<heat_kernel_quantity>)->Name("kernel_quantity")->Arg(small_n)->Arg(large_n)->Unit(benchmark::kMillisecond);
-BENCHMARK(bm_double<heat_kernel_double_named>)->Name("kernel_double_named")->Arg(small_n)->Arg(large_n)->Unit(benchmark::kMillisecond);
-BENCHMARK(bm_quantity<heat_kernel_quantity_named>)->Name("kernel_quantity_named")->Arg(small_n)->Arg(large_n)->Unit(benchmark::kMillisecond);
+BENCHMARK(bm_double<heat_kernel_double>)
+    ->Name("kernel_double")
+    ->Arg(small_n)
+    ->Arg(large_n)
+    ->Unit(benchmark::kMillisecond);
+BENCHMARK(bm_quantity<heat_kernel_quantity>)
+    ->Name("kernel_quantity")
+    ->Arg(small_n)
+    ->Arg(large_n)
+    ->Unit(benchmark::kMillisecond);
+BENCHMARK(bm_double<heat_kernel_double_named>)
+    ->Name("kernel_double_named")
+    ->Arg(small_n)
+    ->Arg(large_n)
+    ->Unit(benchmark::kMillisecond);
+BENCHMARK(bm_quantity<heat_kernel_quantity_named>)
+    ->Name("kernel_quantity_named")
+    ->Arg(small_n)
+    ->Arg(large_n)
+    ->Unit(benchmark::kMillisecond);
 BENCHMARK(bm_ratio)->Name("kernel_ratio")->Arg(small_n)->Arg(large_n)->UseManualTime()->Unit(benchmark::kMillisecond);
 
 /// Console output as usual, and the CPU time of every run kept for the summary.
@@ -162,9 +178,9 @@ int main(int argc, char** argv) {
       const double d = reporter.median(std::string("kernel_double") + form + arg);
       const double q = reporter.median(std::string("kernel_quantity") + form + arg);
       if (d > 0.0 && q > 0.0) {
-        std::printf("summary: kernel%s %7lld cells: double %.3f ns/cell, quantity %.3f ns/cell, ratio quantity/double %.3f\n",
-                    form, static_cast<long long>(n), 1e6 * d / static_cast<double>(n), 1e6 * q / static_cast<double>(n),
-                    q / d);
+        std::printf(
+            "summary: kernel%s %7lld cells: double %.3f ns/cell, quantity %.3f ns/cell, ratio quantity/double %.3f\n",
+            form, static_cast<long long>(n), 1e6 * d / static_cast<double>(n), 1e6 * q / static_cast<double>(n), q / d);
       }
     }
   }

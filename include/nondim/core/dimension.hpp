@@ -46,9 +46,7 @@ struct dimension {
     if (i >= base_dimension_count) throw std::out_of_range("nondim: base dimension index must be 0..6");
     return exponents[i];
   }
-  [[nodiscard]] constexpr rational operator[](base_dimension b) const {
-    return (*this)[static_cast<std::size_t>(b)];
-  }
+  [[nodiscard]] constexpr rational operator[](base_dimension b) const { return (*this)[static_cast<std::size_t>(b)]; }
 
   [[nodiscard]] constexpr bool is_dimensionless() const noexcept { return *this == dimension{}; }
   /// Number of base dimensions with a non-zero exponent.

@@ -137,6 +137,8 @@ struct rational {
 };
 
 /// \brief |r|, checked.
-constexpr rational abs(const rational& r) { return r.num < 0 ? -r : r; }
+constexpr rational abs(const rational& r) {
+  return r.num < 0 ? -r : r;
+}
 
 }  // namespace nondim

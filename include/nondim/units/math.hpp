@@ -123,43 +123,40 @@ constexpr quantity<D, R> max(const quantity<D, R>& a, const quantity<D, R>& b) n
 }
 template <dimension D, class R>
 constexpr quantity<D, R> hypot(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
-  if (std::is_constant_evaluated()) return quantity<D, R>::from_si(detail::const_root(a.si() * a.si() + b.si() * b.si(), 2));
+  if (std::is_constant_evaluated())
+    return quantity<D, R>::from_si(detail::const_root(a.si() * a.si() + b.si() * b.si(), 2));
   return quantity<D, R>::from_si(std::hypot(a.si(), b.si()));
 }
 template <dimension D1, class R1, dimension D2, class R2>
-  requires(D1 != D2)
-constexpr quantity<D1, R1> hypot(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+requires(D1 != D2) constexpr quantity<D1, R1> hypot(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: hypot needs two quantities of the same dimension");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
-  requires(D1 != D2)
-constexpr quantity<D1, R1> min(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+requires(D1 != D2) constexpr quantity<D1, R1> min(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: min needs two quantities of the same dimension");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
-  requires(D1 != D2)
-constexpr quantity<D1, R1> max(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+requires(D1 != D2) constexpr quantity<D1, R1> max(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: max needs two quantities of the same dimension");
   return {};
 }
 
 // Transcendental functions: a dimensionless argument, or a compile error naming the dimension.
-#define NONDIM_DIMENSIONLESS_FUNCTION(fn)                                                              \
-  template <class R>                                                                                  \
-  inline R fn(const quantity<dims::dimensionless, R>& q) noexcept {                                   \
-    return std::fn(q.si());                                                                           \
-  }                                                                                                   \
-  template <dimension D, class R>                                                                     \
-    requires(!D.is_dimensionless())                                                                   \
-  inline R fn(const quantity<D, R>&) noexcept {                                                       \
-    static_assert(detail::dimensions_involved<detail::spell<D>>,                                      \
+#define NONDIM_DIMENSIONLESS_FUNCTION(fn)                                                               \
+  template <class R>                                                                                    \
+  inline R fn(const quantity<dims::dimensionless, R>& q) noexcept {                                     \
+    return std::fn(q.si());                                                                             \
+  }                                                                                                     \
+  template <dimension D, class R>                                                                       \
+  requires(!D.is_dimensionless()) inline R fn(const quantity<D, R>&) noexcept {                         \
+    static_assert(detail::dimensions_involved<detail::spell<D>>,                                        \
                   "nondim: " #fn " needs a dimensionless argument; divide by a reference scale first"); \
-    return R{};                                                                                       \
+    return R{};                                                                                         \
   }
 NONDIM_DIMENSIONLESS_FUNCTION(exp)
 NONDIM_DIMENSIONLESS_FUNCTION(log)

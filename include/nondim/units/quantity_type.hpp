@@ -12,11 +12,14 @@
 
 namespace nondim {
 
-template <dimension D, class Rep = double> class quantity;
+template <dimension D, class Rep = double>
+class quantity;
 
 namespace detail {
-template <class T> struct is_quantity : std::false_type {};
-template <dimension D, class R> struct is_quantity<quantity<D, R>> : std::true_type {};
+template <class T>
+struct is_quantity : std::false_type {};
+template <dimension D, class R>
+struct is_quantity<quantity<D, R>> : std::true_type {};
 }  // namespace detail
 
 /// \brief Any `quantity<D, Rep>`.
@@ -48,13 +51,12 @@ class quantity {
 
   /// \brief A dimensionless value from a number (implicit: it is a number).
   constexpr quantity(Rep v) noexcept  // NOLINT(google-explicit-constructor)
-    requires(D.is_dimensionless())
+      requires(D.is_dimensionless())
       : value_(v) {}
 
   /// Refused: a raw number has no unit. Multiply it by one, or say it is SI.
   template <scalar T>
-    requires(!D.is_dimensionless())
-  constexpr quantity(T) noexcept {  // NOLINT(google-explicit-constructor)
+  requires(!D.is_dimensionless()) constexpr quantity(T) noexcept {  // NOLINT(google-explicit-constructor)
     static_assert(detail::dimensions_involved<detail::spell<D>, T>,
                   "nondim: a raw number cannot become a dimensional quantity; write `x * units::m` "
                   "(its unit) or `quantity<D>::from_si(x)`");
@@ -62,13 +64,13 @@ class quantity {
 
   /// \brief Converting between representations of the same dimension.
   template <class R2>
-    requires(!std::same_as<R2, Rep> && std::convertible_to<R2, Rep>)
-  constexpr explicit quantity(const quantity<D, R2>& o) noexcept : value_(static_cast<Rep>(o.si())) {}
+  requires(!std::same_as<R2, Rep> &&
+           std::convertible_to<R2, Rep>) constexpr explicit quantity(const quantity<D, R2>& o) noexcept
+      : value_(static_cast<Rep>(o.si())) {}
 
   /// Refused: a quantity of another dimension (the poisoned overload names both).
   template <dimension D2, class R2>
-    requires(D2 != D)
-  constexpr quantity(const quantity<D2, R2>&) noexcept {  // NOLINT(google-explicit-constructor)
+  requires(D2 != D) constexpr quantity(const quantity<D2, R2>&) noexcept {  // NOLINT(google-explicit-constructor)
     static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
                   "nondim: cannot initialise or assign a quantity from one of another dimension "
                   "(target first, source second)");
@@ -79,8 +81,7 @@ class quantity {
 
   /// \brief A dimensionless value is a number.
   constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
-    requires(D.is_dimensionless())
-  {
+      requires(D.is_dimensionless()) {
     return value_;
   }
   /// Refused: a dimensional value is not a number until divided by a unit. Deliberately not
@@ -88,8 +89,7 @@ class quantity {
   /// every quantity expression (most of the front-end time of quantity code; bench/RESULTS.md).
   /// Conversions to other arithmetic types go through Rep and end here too.
   constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
-    requires(!D.is_dimensionless())
-  {
+      requires(!D.is_dimensionless()) {
     static_assert(detail::dimensions_involved<detail::spell<D>, Rep>,
                   "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
                   "(`q / units::m`) or read `q.si()`");
@@ -118,15 +118,13 @@ class quantity {
     return *this;
   }
   template <dimension D2, class R2>
-    requires(D2 != D)
-  constexpr quantity& operator+=(const quantity<D2, R2>&) noexcept {
+  requires(D2 != D) constexpr quantity& operator+=(const quantity<D2, R2>&) noexcept {
     static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
                   "nondim: cannot add a quantity of another dimension");
     return *this;
   }
   template <dimension D2, class R2>
-    requires(D2 != D)
-  constexpr quantity& operator-=(const quantity<D2, R2>&) noexcept {
+  requires(D2 != D) constexpr quantity& operator-=(const quantity<D2, R2>&) noexcept {
     static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
                   "nondim: cannot subtract a quantity of another dimension");
     return *this;
@@ -159,29 +157,26 @@ constexpr auto operator<=>(const quantity<D, R>& a, const quantity<D, R>& b) noe
 
 // Poisoned fallbacks: each names the two dimensions.
 template <dimension D1, class R1, dimension D2, class R2>
-  requires(D1 != D2)
-constexpr quantity<D1, R1> operator+(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+requires(D1 != D2) constexpr quantity<D1, R1> operator+(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: cannot add quantities of different dimensions");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
-  requires(D1 != D2)
-constexpr quantity<D1, R1> operator-(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+requires(D1 != D2) constexpr quantity<D1, R1> operator-(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: cannot subtract quantities of different dimensions");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
-  requires(D1 != D2)
-constexpr bool operator==(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+requires(D1 != D2) constexpr bool operator==(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: cannot compare quantities of different dimensions");
   return false;
 }
 template <dimension D1, class R1, dimension D2, class R2>
-  requires(D1 != D2)
-constexpr std::partial_ordering operator<=>(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
+requires(D1 != D2) constexpr std::partial_ordering operator<=>(const quantity<D1, R1>&,
+                                                               const quantity<D2, R2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: cannot compare quantities of different dimensions");
   return std::partial_ordering::unordered;
@@ -227,43 +222,37 @@ namespace nondim {
 // A raw number added to or compared with a dimensional quantity: refused with the dimension
 // named (without these, the built-in operators would be tried and fail as an ambiguity).
 template <dimension D, class R, scalar T>
-  requires(!D.is_dimensionless())
-constexpr quantity<D, R> operator+(const quantity<D, R>&, T) noexcept {
+requires(!D.is_dimensionless()) constexpr quantity<D, R> operator+(const quantity<D, R>&, T) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D>, T>,
                 "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
-  requires(!D.is_dimensionless())
-constexpr quantity<D, R> operator+(T, const quantity<D, R>&) noexcept {
+requires(!D.is_dimensionless()) constexpr quantity<D, R> operator+(T, const quantity<D, R>&) noexcept {
   static_assert(detail::dimensions_involved<T, detail::spell<D>>,
                 "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
-  requires(!D.is_dimensionless())
-constexpr quantity<D, R> operator-(const quantity<D, R>&, T) noexcept {
+requires(!D.is_dimensionless()) constexpr quantity<D, R> operator-(const quantity<D, R>&, T) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D>, T>,
                 "nondim: cannot subtract a raw number from a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
-  requires(!D.is_dimensionless())
-constexpr quantity<D, R> operator-(T, const quantity<D, R>&) noexcept {
+requires(!D.is_dimensionless()) constexpr quantity<D, R> operator-(T, const quantity<D, R>&) noexcept {
   static_assert(detail::dimensions_involved<T, detail::spell<D>>,
                 "nondim: cannot subtract a dimensional quantity from a raw number; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
-  requires(!D.is_dimensionless())
-constexpr bool operator==(const quantity<D, R>&, T) noexcept {
+requires(!D.is_dimensionless()) constexpr bool operator==(const quantity<D, R>&, T) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D>, T>,
                 "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
   return false;
 }
 template <dimension D, class R, scalar T>
-  requires(!D.is_dimensionless())
-constexpr std::partial_ordering operator<=>(const quantity<D, R>&, T) noexcept {
+requires(!D.is_dimensionless()) constexpr std::partial_ordering operator<=>(const quantity<D, R>&, T) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D>, T>,
                 "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
   return std::partial_ordering::unordered;

@@ -23,11 +23,11 @@ namespace nondim {
 struct unit_entry {
   std::string_view symbol;
   std::string_view name;
-  double factor;       ///< to coherent SI
+  double factor;  ///< to coherent SI
   dimension dim;
-  bool prefixable;     ///< takes SI prefixes
-  int decade;          ///< factor == 10^decade exactly; `no_decade` otherwise (keeps prefixed factors exact)
-  double offset;       ///< affine zero in kelvin (degC, degF); 0 for every other unit
+  bool prefixable;  ///< takes SI prefixes
+  int decade;       ///< factor == 10^decade exactly; `no_decade` otherwise (keeps prefixed factors exact)
+  double offset;    ///< affine zero in kelvin (degC, degF); 0 for every other unit
   std::string_view source;
 };
 
@@ -44,25 +44,21 @@ inline constexpr int pow10_min = -40;
 inline constexpr int pow10_max = 40;
 /// Correctly rounded powers of ten (decimal literals are rounded by the compiler once).
 inline constexpr std::array<double, pow10_max - pow10_min + 1> pow10_table{
-1e-40, 1e-39, 1e-38, 1e-37, 1e-36, 1e-35, 1e-34, 1e-33,
-1e-32, 1e-31, 1e-30, 1e-29, 1e-28, 1e-27, 1e-26, 1e-25,
-1e-24, 1e-23, 1e-22, 1e-21, 1e-20, 1e-19, 1e-18, 1e-17,
-1e-16, 1e-15, 1e-14, 1e-13, 1e-12, 1e-11, 1e-10, 1e-9,
-1e-8, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 1e-2, 1e-1,
-1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7,
-1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15,
-1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22, 1e23,
-1e24, 1e25, 1e26, 1e27, 1e28, 1e29, 1e30, 1e31,
-1e32, 1e33, 1e34, 1e35, 1e36, 1e37, 1e38, 1e39,
-1e40
-};
-constexpr double pow10(int e) { return pow10_table.at(static_cast<std::size_t>(e - pow10_min)); }
+    1e-40, 1e-39, 1e-38, 1e-37, 1e-36, 1e-35, 1e-34, 1e-33, 1e-32, 1e-31, 1e-30, 1e-29, 1e-28, 1e-27,
+    1e-26, 1e-25, 1e-24, 1e-23, 1e-22, 1e-21, 1e-20, 1e-19, 1e-18, 1e-17, 1e-16, 1e-15, 1e-14, 1e-13,
+    1e-12, 1e-11, 1e-10, 1e-9,  1e-8,  1e-7,  1e-6,  1e-5,  1e-4,  1e-3,  1e-2,  1e-1,  1e0,   1e1,
+    1e2,   1e3,   1e4,   1e5,   1e6,   1e7,   1e8,   1e9,   1e10,  1e11,  1e12,  1e13,  1e14,  1e15,
+    1e16,  1e17,  1e18,  1e19,  1e20,  1e21,  1e22,  1e23,  1e24,  1e25,  1e26,  1e27,  1e28,  1e29,
+    1e30,  1e31,  1e32,  1e33,  1e34,  1e35,  1e36,  1e37,  1e38,  1e39,  1e40};
+constexpr double pow10(int e) {
+  return pow10_table.at(static_cast<std::size_t>(e - pow10_min));
+}
 
 // Exact definitions shared by several entries (NIST SP 811 (2008) Appendix B.8).
 inline constexpr double foot = 0.3048;
 inline constexpr double inch = 0.0254;
 inline constexpr double pound_mass = 0.45359237;
-inline constexpr double standard_gravity = 9.80665;  // SI Brochure 9th ed. / CGPM 1901
+inline constexpr double standard_gravity = 9.80665;                   // SI Brochure 9th ed. / CGPM 1901
 inline constexpr double pound_force = pound_mass * standard_gravity;  // 4.4482216152605 N
 inline constexpr double btu_it = 1055.05585262;
 inline constexpr double pi = 3.141592653589793238462643383279502884;
@@ -138,8 +134,10 @@ inline constexpr std::array unit_table{
     detail::metric("St", "stokes", -4, dims::kinematic_viscosity, detail::nist_b8),
     detail::metric("dyn", "dyne", -5, dims::force, detail::nist_b8),
     detail::metric("erg", "erg", -7, dims::energy, detail::nist_b8),
-    unit_entry{"cal", "calorie (International Table)", 4.1868, dims::energy, true, detail::no_decade, 0.0, detail::nist_b8},
-    unit_entry{"cal_th", "calorie (thermochemical)", 4.184, dims::energy, true, detail::no_decade, 0.0, detail::nist_b8},
+    unit_entry{"cal", "calorie (International Table)", 4.1868, dims::energy, true, detail::no_decade, 0.0,
+               detail::nist_b8},
+    unit_entry{"cal_th", "calorie (thermochemical)", 4.184, dims::energy, true, detail::no_decade, 0.0,
+               detail::nist_b8},
     detail::plain("\u00c5", "angstrom", 1.0e-10, dims::length, detail::nist_b8),
     detail::plain("kgf", "kilogram-force", detail::standard_gravity, dims::force, detail::nist_b8),
     detail::plain("atm", "standard atmosphere", 101325.0, dims::pressure, detail::nist_b8),
@@ -161,7 +159,7 @@ inline constexpr std::array unit_table{
     detail::plain("slug", "slug", detail::pound_force / detail::foot, dims::mass, detail::nist_b8),
     detail::plain("lbf", "pound-force", detail::pound_force, dims::force, detail::nist_b8),
     detail::plain("kip", "kip (1000 lbf)", 1000.0 * detail::pound_force, dims::force, detail::nist_b8),
-    detail::plain("pdl", "poundal", detail::pound_mass * detail::foot, dims::force, detail::nist_b8),
+    detail::plain("pdl", "poundal", detail::pound_mass* detail::foot, dims::force, detail::nist_b8),
     detail::plain("psi", "pound-force per square inch", detail::pound_force / (detail::inch * detail::inch),
                   dims::pressure, detail::nist_b8),
     detail::plain("ksi", "kip per square inch", 1000.0 * detail::pound_force / (detail::inch * detail::inch),
@@ -179,8 +177,8 @@ inline constexpr std::array unit_table{
     detail::plain("mph", "mile per hour", 5280.0 * detail::foot / 3600.0, dims::velocity, detail::nist_b8),
     detail::plain("lbmol", "pound-mole", 1000.0 * detail::pound_mass, dims::amount, "common practice, no source"),
     // Fahrenheit and Rankine: degF affine alone, an interval inside a compound unit; degR never affine
-    unit_entry{"degF", "degree Fahrenheit", 5.0 / 9.0, dims::temperature, false, detail::no_decade,
-               459.67 * 5.0 / 9.0, detail::nist_b9},
+    unit_entry{"degF", "degree Fahrenheit", 5.0 / 9.0, dims::temperature, false, detail::no_decade, 459.67 * 5.0 / 9.0,
+               detail::nist_b9},
     detail::plain("degR", "degree Rankine", 5.0 / 9.0, dims::temperature, detail::nist_b9),
 };
 
@@ -190,22 +188,22 @@ struct unit_alias {
   std::string_view symbol;
 };
 inline constexpr std::array unit_aliases{
-    unit_alias{"l", "L"},          unit_alias{"lbm", "lb"},        unit_alias{"Ohm", "\u03a9"},
+    unit_alias{"l", "L"},           unit_alias{"lbm", "lb"},       unit_alias{"Ohm", "\u03a9"},
     unit_alias{"\u2126", "\u03a9"}, unit_alias{"\u00b0C", "degC"}, unit_alias{"\u2103", "degC"},
-    unit_alias{"\u00b0F", "degF"}, unit_alias{"\u2109", "degF"},  unit_alias{"\u00b0R", "degR"},
-    unit_alias{"\u00b0", "deg"},   unit_alias{"kn", "knot"},      unit_alias{"kt", "knot"},
-    unit_alias{"BTU", "Btu"},      unit_alias{"torr", "Torr"},    unit_alias{"\u212b", "\u00c5"},
+    unit_alias{"\u00b0F", "degF"},  unit_alias{"\u2109", "degF"},  unit_alias{"\u00b0R", "degR"},
+    unit_alias{"\u00b0", "deg"},    unit_alias{"kn", "knot"},      unit_alias{"kt", "knot"},
+    unit_alias{"BTU", "Btu"},       unit_alias{"torr", "Torr"},    unit_alias{"\u212b", "\u00c5"},
 };
 
 /// \brief SI prefixes, longest symbol first where one is a prefix of another ("da" before "d").
 inline constexpr std::array prefix_table{
-    prefix_entry{"Q", 30},  prefix_entry{"R", 27},  prefix_entry{"Y", 24},  prefix_entry{"Z", 21},
-    prefix_entry{"E", 18},  prefix_entry{"P", 15},  prefix_entry{"T", 12},  prefix_entry{"G", 9},
-    prefix_entry{"M", 6},   prefix_entry{"k", 3},   prefix_entry{"h", 2},   prefix_entry{"da", 1},
-    prefix_entry{"d", -1},  prefix_entry{"c", -2},  prefix_entry{"m", -3},  prefix_entry{"u", -6},
-    prefix_entry{"\u00b5", -6}, prefix_entry{"\u03bc", -6}, prefix_entry{"n", -9}, prefix_entry{"p", -12},
-    prefix_entry{"f", -15}, prefix_entry{"a", -18}, prefix_entry{"z", -21}, prefix_entry{"y", -24},
-    prefix_entry{"r", -27}, prefix_entry{"q", -30},
+    prefix_entry{"Q", 30},      prefix_entry{"R", 27},      prefix_entry{"Y", 24},  prefix_entry{"Z", 21},
+    prefix_entry{"E", 18},      prefix_entry{"P", 15},      prefix_entry{"T", 12},  prefix_entry{"G", 9},
+    prefix_entry{"M", 6},       prefix_entry{"k", 3},       prefix_entry{"h", 2},   prefix_entry{"da", 1},
+    prefix_entry{"d", -1},      prefix_entry{"c", -2},      prefix_entry{"m", -3},  prefix_entry{"u", -6},
+    prefix_entry{"\u00b5", -6}, prefix_entry{"\u03bc", -6}, prefix_entry{"n", -9},  prefix_entry{"p", -12},
+    prefix_entry{"f", -15},     prefix_entry{"a", -18},     prefix_entry{"z", -21}, prefix_entry{"y", -24},
+    prefix_entry{"r", -27},     prefix_entry{"q", -30},
 };
 
 /// \brief A symbol resolved against the table: which entry, which prefix, the SI factor.

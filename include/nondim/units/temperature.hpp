@@ -33,13 +33,16 @@ class temperature_point {
 
   constexpr temperature_point() noexcept = default;
   /// \brief From kelvin, as a quantity (an absolute value, not a difference).
-  static constexpr temperature_point from_kelvin(difference absolute) noexcept { return temperature_point(absolute.si()); }
+  static constexpr temperature_point from_kelvin(difference absolute) noexcept {
+    return temperature_point(absolute.si());
+  }
   static constexpr temperature_point from_kelvin(Rep kelvin) noexcept { return temperature_point(kelvin); }
   static constexpr temperature_point from_celsius(Rep c) noexcept {
     return temperature_point(c + static_cast<Rep>(detail::celsius_offset));
   }
   static constexpr temperature_point from_fahrenheit(Rep f) noexcept {
-    return temperature_point(f * static_cast<Rep>(detail::fahrenheit_factor) + static_cast<Rep>(detail::fahrenheit_offset));
+    return temperature_point(f * static_cast<Rep>(detail::fahrenheit_factor) +
+                             static_cast<Rep>(detail::fahrenheit_offset));
   }
 
   /// \brief The thermodynamic temperature T as a quantity in kelvin, for formulas like p = ρRT.
@@ -80,12 +83,16 @@ constexpr temperature_point<R> operator+(const temperature_point<R>&, const temp
 }
 
 /// \brief 20 °C as an absolute temperature.
-constexpr temperature_point<double> from_celsius(double c) noexcept { return temperature_point<double>::from_celsius(c); }
+constexpr temperature_point<double> from_celsius(double c) noexcept {
+  return temperature_point<double>::from_celsius(c);
+}
 /// \brief 68 °F as an absolute temperature.
 constexpr temperature_point<double> from_fahrenheit(double f) noexcept {
   return temperature_point<double>::from_fahrenheit(f);
 }
 /// \brief 293.15 K as an absolute temperature.
-constexpr temperature_point<double> from_kelvin(double k) noexcept { return temperature_point<double>::from_kelvin(k); }
+constexpr temperature_point<double> from_kelvin(double k) noexcept {
+  return temperature_point<double>::from_kelvin(k);
+}
 
 }  // namespace nondim

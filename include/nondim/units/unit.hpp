@@ -47,8 +47,7 @@ constexpr R operator/(const quantity<D, R>& q, const unit<D>& u) noexcept {
 }
 /// \brief Dividing by a unit of another dimension combines them: `2.0 * units::m / units::s`.
 template <dimension D1, class R, dimension D2>
-  requires(D1 != D2)
-constexpr quantity<D1 / D2, R> operator/(const quantity<D1, R>& q, const unit<D2>& u) noexcept {
+requires(D1 != D2) constexpr quantity<D1 / D2, R> operator/(const quantity<D1, R>& q, const unit<D2>& u) noexcept {
   return quantity<D1 / D2, R>::from_si(q.si() / static_cast<R>(u.factor));
 }
 template <dimension D, scalar T>
@@ -63,8 +62,7 @@ constexpr R in(const quantity<D, R>& q, const unit<D>& u) noexcept {
 }
 /// Refused: reading a quantity in a unit of another dimension.
 template <dimension D1, class R, dimension D2>
-  requires(D1 != D2)
-constexpr R in(const quantity<D1, R>&, const unit<D2>&) noexcept {
+requires(D1 != D2) constexpr R in(const quantity<D1, R>&, const unit<D2>&) noexcept {
   static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
                 "nondim: cannot read a quantity in a unit of another dimension (quantity first, unit second)");
   return R{};
