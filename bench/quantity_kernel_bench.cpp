@@ -9,6 +9,7 @@
 // callgrind_compare.sh; this file shows the same in time.
 #include <benchmark/benchmark.h>
 
+#include <unistd.h>
 #include <algorithm>
 #include <cstdio>
 #include <ctime>
@@ -141,6 +142,7 @@ BENCHMARK(bm_ratio)->Name("kernel_ratio")->Arg(small_n)->Arg(large_n)->UseManual
 /// Console output as usual, and the CPU time of every run kept for the summary.
 class recording_reporter : public benchmark::ConsoleReporter {
  public:
+  explicit recording_reporter(OutputOptions o) : ConsoleReporter(o) {}
   void ReportRuns(const std::vector<Run>& runs) override {
     for (const auto& r : runs) {
       const std::string name = r.run_name.str();  // without the aggregate suffix
@@ -167,9 +169,17 @@ class recording_reporter : public benchmark::ConsoleReporter {
 }  // namespace
 
 int main(int argc, char** argv) {
+  // The library applies --benchmark_color only to its own reporter: decide here (colour only on a
+  // terminal and unless switched off), before Initialize consumes the flags.
+  bool color = isatty(STDOUT_FILENO) != 0;
+  for (int i = 1; i < argc; ++i) {
+    const std::string a = argv[i];
+    if (a == "--benchmark_color=false" || a == "--benchmark_color=no") color = false;
+  }
   benchmark::Initialize(&argc, argv);
   if (benchmark::ReportUnrecognizedArguments(argc, argv)) return 1;
-  recording_reporter reporter;
+  recording_reporter reporter(color ? benchmark::ConsoleReporter::OO_ColorTabular
+                                    : benchmark::ConsoleReporter::OO_Tabular);
   benchmark::RunSpecifiedBenchmarks(&reporter);
   benchmark::Shutdown();
   for (const char* form : {"", "_named"}) {
