@@ -2,7 +2,7 @@
 # Instruction counts (callgrind Ir, deterministic) of the wall heat-transfer kernel written on
 # nondim quantities and on raw double, at -O2, with each compiler found.
 #
-#   bench/callgrind_compare.sh [--cells N] [--compilers "g++ clang++"] [--work DIR] [--strict]
+#   bench/callgrind_compare.sh [--cells N] [--compilers "g++ clang++"] [--include DIR] [--work DIR] [--strict]
 #
 # For every compiler and both forms of the kernel (one expression for Nu; the power terms
 # named), it compiles bench/callgrind_driver.cpp once per kernel (each binary holds one kernel),
@@ -12,7 +12,8 @@
 #   self  Ir of the kernel's own instructions
 # and the ratio quantity/double. The target is a ratio of 1 (equal counts). The checksums
 # say whether both kernels produced bit-identical outputs. --strict: exit 1 if any inclusive
-# count differs. Needs valgrind; installs nothing.
+# count differs. --include DIR: use the nondim headers in DIR (an A/B of a library change).
+# Needs valgrind; installs nothing.
 set -euo pipefail
 
 here=$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)
@@ -21,13 +22,15 @@ cells=100000
 compilers="g++ clang++"
 work=""
 strict=0
+include="$root/include"
 while [[ $# -gt 0 ]]; do
   case "$1" in
     --cells) cells=$2; shift 2 ;;
     --compilers) compilers=$2; shift 2 ;;
     --work) work=$2; shift 2 ;;
+    --include) include=$(realpath "$2"); shift 2 ;;
     --strict) strict=1; shift ;;
-    -h|--help) sed -n '2,17p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,19p' "$0"; exit 0 ;;
     *) echo "callgrind_compare.sh: unknown argument '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
@@ -45,7 +48,7 @@ fi
 mkdir -p "$work"
 
 flags=(-std=c++20 -O2 -Wall -Wextra -Wpedantic -Wshadow -Wconversion -Wsign-conversion -Werror
-       -I"$root/include" -I"$here")
+       -I"$include" -I"$here")
 
 # name of the kernel function -> 1 if it is the quantity form
 declare -A is_quantity=([heat_kernel_quantity]=1 [heat_kernel_double]=0
