@@ -60,19 +60,35 @@ if ! cmake -S "$root" -B "$build" "${generator[@]}" -DCMAKE_BUILD_TYPE=Release -
 fi
 
 step "build"
-cmake --build "$build" --target nondim_benchmarks -j2 >"$logs/build.log" 2>&1 ||
-  { tail -40 "$logs/build.log" >&2; fail "build failed, log: $logs/build.log"; }
+# One target per bench/*_bench.cpp; a benchmark that does not build is reported and skipped,
+# the others still run, and the script exits 1 at the end.
+broken=()
+benches=()
+for src in "$here"/*_bench.cpp; do
+  name=$(basename "$src" .cpp)
+  if cmake --build "$build" --target "$name" -j2 >"$logs/build-$name.log" 2>&1; then
+    benches+=("$build/bench/$name")
+  else
+    broken+=("$name")
+    echo "run_all.sh: $name does not build, skipped (log: $logs/build-$name.log):" >&2
+    grep -m3 -E 'error|Error' "$logs/build-$name.log" >&2 || true
+  fi
+done
+[[ ${#benches[@]} -gt 0 ]] || fail "no benchmark builds, logs in $logs"
 
 summaries=()
-shopt -s nullglob
-benches=("$build"/bench/*_bench)
-[[ ${#benches[@]} -gt 0 ]] || fail "no benchmark executables in $build/bench"
 for exe in "${benches[@]}"; do
   name=$(basename "$exe")
   step "$name (min_time $min_time s, $reps repetitions, medians)"
+  status=0
   "$exe" --benchmark_min_time="$min_time" --benchmark_repetitions="$reps" --benchmark_report_aggregates_only=true \
-    --benchmark_color=false 2>&1 | tee "$logs/$name.log"
-  while IFS= read -r line; do summaries+=("$name: $line"); done < <(grep '^summary:' "$logs/$name.log" || true)
+    --benchmark_color=false >"$logs/$name.log" 2>&1 || status=$?
+  cat "$logs/$name.log"
+  [[ $status == 0 ]] || broken+=("$name (exit status $status)")
+  # ratio lines: `summary: ...` lines, and the indented block after a line starting "ratio"
+  while IFS= read -r line; do summaries+=("$name: $line"); done < <(
+    awk '/^summary:/ {print; next} /^ratio/ {inblock = 1; print; next} inblock && /^  / {print; next} {inblock = 0}' \
+      "$logs/$name.log")
 done
 
 step "instruction counts (callgrind)"
@@ -86,3 +102,7 @@ while IFS= read -r line; do summaries+=("compile: $line"); done < <(grep '^summa
 step "ratios"
 printf '%s\n' "${summaries[@]}"
 echo "(machine: $(nproc) cores, $(lscpu | sed -n 's/^Model name:[[:space:]]*//p'); logs in $logs)"
+if [[ ${#broken[@]} -gt 0 ]]; then
+  printf 'run_all.sh: benchmarks that did not build or failed: %s\n' "${broken[*]}" >&2
+  exit 1
+fi
