@@ -23,19 +23,20 @@ inline big to_big(const nondim::rational& r) {
   return x / r.den;
 }
 
-/// Rank of the vectors `v` (all of the same length), by row echelon form in cpp_rational.
-inline std::size_t rank_of(std::vector<std::vector<big>> v) {
+/// Rank of the vectors `v` (all of the same length), by row echelon form over F.
+template <class F>
+std::size_t rank_in(std::vector<std::vector<F>> v) {
   if (v.empty()) return 0;
   const std::size_t cols = v.front().size();
   std::size_t rank = 0;
   for (std::size_t c = 0; c < cols && rank < v.size(); ++c) {
     std::size_t p = rank;
-    while (p < v.size() && v[p][c] == 0) ++p;
+    while (p < v.size() && v[p][c] == F(0)) ++p;
     if (p == v.size()) continue;
     std::swap(v[p], v[rank]);
     for (std::size_t i = rank + 1; i < v.size(); ++i) {
-      if (v[i][c] == 0) continue;
-      const big f = v[i][c] / v[rank][c];
+      if (v[i][c] == F(0)) continue;
+      const F f = v[i][c] / v[rank][c];
       for (std::size_t k = c; k < cols; ++k) v[i][k] -= f * v[rank][k];
     }
     ++rank;
@@ -43,15 +44,24 @@ inline std::size_t rank_of(std::vector<std::vector<big>> v) {
   return rank;
 }
 
-/// Rank of a set of dimensions (as vectors of 7 exponents).
+inline std::size_t rank_of(const std::vector<std::vector<big>>& v) { return rank_in(v); }
+
+/// Rank of a set of dimensions (as vectors of 7 exponents): in checked int64 rationals,
+/// which throw rather than wrap, and in cpp_rational when they overflow.
 inline std::size_t rank_of(const std::vector<nondim::dimension>& dims) {
-  std::vector<std::vector<big>> v;
-  for (const auto& d : dims) {
-    std::vector<big> row;
-    for (std::size_t i = 0; i < nondim::base_dimension_count; ++i) row.push_back(to_big(d[i]));
-    v.push_back(row);
+  try {
+    std::vector<std::vector<nondim::rational>> v;
+    for (const auto& d : dims) v.emplace_back(d.exponents.begin(), d.exponents.end());
+    return rank_in(v);
+  } catch (const nondim::rational_overflow&) {
+    std::vector<std::vector<big>> v;
+    for (const auto& d : dims) {
+      std::vector<big> row;
+      for (std::size_t i = 0; i < nondim::base_dimension_count; ++i) row.push_back(to_big(d[i]));
+      v.push_back(row);
+    }
+    return rank_in(v);
   }
-  return rank_of(v);
 }
 
 /// The exponents of the product of powers `e` of `dims`, exactly (no overflow possible).
