@@ -101,7 +101,7 @@ inline std::string explain_deficiency(std::size_t rank, const rank_deficiency& d
     if (involved[i]) tied.emplace_back(dimension_symbol(i, form));
   std::string s = "rank " + std::to_string(rank) + " is less than the " + std::to_string(d.present.size()) +
                   " base dimensions that appear (" + spoken_list(present) + "): ";
-  if (rank == 0) return s + "no variable has a dimension";
+  if (d.too_large) return s + "they appear only in fixed combinations whose exponents exceed 64 bits";
   s += "every variable's dimension is a product of powers of " + spoken_list(spanned);
   if (!combos.empty())
     s += ", so " + spoken_list(tied) + " appear only in the fixed combination" + (combos.size() == 1 ? " " : "s ") +
@@ -173,6 +173,7 @@ inline analysis classical_analysis(const problem& p, const options& o) {
 
   a.deficiency.present = a.matrix.present_rows();
   a.deficiency.spanned = x.spanning;
+  a.deficiency.too_large = x.spanning_too_large;
   for (const auto& s : x.spanning)
     if (s.base_count() > 1) a.deficiency.combinations.push_back(s);
   a.deficiency.deficient = a.rank < a.deficiency.present.size();

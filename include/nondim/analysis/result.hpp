@@ -32,6 +32,7 @@ struct rank_deficiency {
   std::vector<std::size_t> present;      ///< base dimensions (0..6, L M T I Θ N J) that appear
   std::vector<dimension> spanned;        ///< rank of them
   std::vector<dimension> combinations;   ///< the elements of `spanned` with more than one base dimension
+  bool too_large = false;  ///< `spanned` would need exponents beyond 64 bits: it and `combinations` are empty
   std::string explanation;               ///< one ASCII sentence; empty when not deficient
 
   friend bool operator==(const rank_deficiency&, const rank_deficiency&) = default;

@@ -27,6 +27,7 @@ struct exact_outcome {
   std::vector<std::size_t> heads;                 ///< non-repeating variable of each group, ascending
   std::vector<std::vector<std::int64_t>> groups;  ///< aligned with `heads`, n entries each
   std::vector<dimension> spanning;                ///< primitive basis of the dimensions spanned
+  bool spanning_too_large = false;                ///< that basis has exponents beyond 64 bits
   bool multiprecision = false;
 };
 
@@ -166,15 +167,15 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   for (std::size_t j = 0; j < n; ++j)
     for (std::size_t i = 0; i < base_dimension_count; ++i) t(j, i) = from_rational<F>(dims[j][i]);
   const std::size_t rank_t = reduce_to_echelon(t).size();
-  for (std::size_t r = 0; r < rank_t; ++r) {
-    std::vector<std::int64_t> e;
-    try {
-      e = primitive_integers(std::span<const F>(&t(r, 0), base_dimension_count));
-    } catch (const integers_too_large& ex) {
-      throw analysis_error("nondim: the dimensions of the variables combine with an exponent beyond 64 bits (" +
-                           ex.example + ")");
+  try {
+    for (std::size_t r = 0; r < rank_t; ++r) {
+      const std::vector<std::int64_t> e = primitive_integers(std::span<const F>(&t(r, 0), base_dimension_count));
+      out.spanning.push_back(dimension{e[0], e[1], e[2], e[3], e[4], e[5], e[6]});
     }
-    out.spanning.push_back(dimension{e[0], e[1], e[2], e[3], e[4], e[5], e[6]});
+  } catch (const integers_too_large&) {
+    // Only an explanation is lost, not a result: say so rather than refuse the analysis.
+    out.spanning.clear();
+    out.spanning_too_large = true;
   }
   return out;
 }
