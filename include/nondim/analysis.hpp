@@ -3,6 +3,7 @@
 /// \brief The analysis layer: named variables, the exact dimensionless groups, their
 /// evaluation and text forms, the SVD cross-check. Needs Boost.Multiprecision and Eigen.
 
+#include "parse.hpp"
 #include "quantity.hpp"
 
 #include "analysis/analyze.hpp"
@@ -16,3 +17,4 @@
 #include "analysis/svd_check.hpp"
 #include "analysis/symbols.hpp"
 #include "analysis/text.hpp"
+#include "analysis/compile_time.hpp"

@@ -5,4 +5,4 @@
 
 #include "quantity.hpp"
 #include "parse.hpp"
-#include "analysis/compile_time.hpp"
+#include "analysis.hpp"

@@ -3,6 +3,7 @@
 /// \brief `analysis_error`: bad input to a dimensional analysis (a problem, its options, or
 /// values given to a group), with the variable it concerns.
 
+#include <cstddef>
 #include <stdexcept>
 #include <string>
 #include <utility>
@@ -17,14 +18,18 @@ namespace nondim {
 /// the name alone (empty when the fault concerns no single variable).
 class analysis_error : public std::invalid_argument {
  public:
-  explicit analysis_error(const std::string& what, std::string variable = {})
-      : std::invalid_argument(what), variable_(std::move(variable)) {}
+  explicit analysis_error(const std::string& what, std::string variable = {}, std::size_t unit_column = 0)
+      : std::invalid_argument(what), variable_(std::move(variable)), unit_column_(unit_column) {}
 
   /// \brief The variable the fault concerns; empty when there is none.
   [[nodiscard]] const std::string& variable() const noexcept { return variable_; }
+  /// \brief For a unit that cannot be read, the 1-based column (in code points) of the
+  /// fault in the unit text; 0 for every other fault.
+  [[nodiscard]] std::size_t unit_column() const noexcept { return unit_column_; }
 
  private:
   std::string variable_;
+  std::size_t unit_column_ = 0;
 };
 
 }  // namespace nondim

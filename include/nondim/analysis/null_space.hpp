@@ -53,7 +53,7 @@ inline null_space_basis exact_null_space(const dimension_matrix& a,
       x[c] = F(1);
       for (std::size_t r = 0; r < out.rank; ++r) x[out.pivots[r]] = F(-m(r, c));
       try {
-        out.vectors.push_back(detail::primitive_integers(std::span<const F>(x)));
+        out.vectors.push_back(detail::primitive_integer_vector(std::span<const F>(x)));
       } catch (const detail::integers_too_large& e) {
         throw analysis_error("nondim: the null vector of column " + std::to_string(c + 1) +
                              " needs an exponent beyond 64 bits (" + e.example + ")");

@@ -3,6 +3,7 @@
 /// \brief `problem`: the named variables of a physical problem, in the order they were added.
 
 #include <cstddef>
+#include <exception>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -11,6 +12,8 @@
 
 #include "../core/dimension.hpp"
 #include "../core/format.hpp"
+#include "../parse/errors.hpp"
+#include "../parse/unit_parser.hpp"
 #include "error.hpp"
 #include "matrix.hpp"
 
@@ -43,6 +46,29 @@ class problem {
     check_name(name);
     std::string unit = si_unit_string(d, text_form::ascii);
     variables_.push_back(variable{std::move(name), d, std::move(unit), 1.0, 0.0});
+    return *this;
+  }
+
+  /// \brief Adds a variable whose unit is the expression `unit_text` (read by `parse_unit`:
+  /// `"kg/m^3"`, `"Pa*s"`, `"lbf"`, `"degC"`); its factor and offset to SI are kept, so that
+  /// values can be given and reported in the variable's own unit.
+  /// \throws analysis_error when `name` is empty or already in the problem, or when the
+  ///         unit cannot be read; then the message names the variable and the unit, and
+  ///         the `unit_error` (with its column) is nested (`std::rethrow_if_nested`) and its
+  ///         column is given by `analysis_error::unit_column()`.
+  problem& add(std::string name, std::string_view unit_text) {
+    check_name(name);
+    parsed_unit u;
+    try {
+      u = parse_unit(unit_text);
+    } catch (const unit_error& e) {
+      std::string why = e.what();
+      if (why.rfind("nondim: ", 0) == 0) why.erase(0, 8);
+      std::throw_with_nested(analysis_error(
+          "nondim: variable '" + name + "' has a unit that cannot be read ('" + std::string(unit_text) + "'): " + why,
+          name, e.column()));
+    }
+    variables_.push_back(variable{std::move(name), u.dim, std::string(unit_text), u.factor, u.offset});
     return *this;
   }
 

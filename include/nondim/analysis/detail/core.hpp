@@ -152,7 +152,7 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     x[head] = F(1);
     for (std::size_t r = 0; r < pivots.size(); ++r) x[order[pivots[r]]] = F(-m(r, c));
     try {
-      out.groups.push_back(primitive_integers(std::span<const F>(x)));
+      out.groups.push_back(primitive_integer_vector(std::span<const F>(x)));
     } catch (const integers_too_large& e) {
       throw analysis_error("nondim: the group of '" + names[head] + "' needs an exponent beyond 64 bits (" +
                                e.example + "); the exact answer cannot be given as int64 exponents",
@@ -169,7 +169,7 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   const std::size_t rank_t = reduce_to_echelon(t).size();
   try {
     for (std::size_t r = 0; r < rank_t; ++r) {
-      const std::vector<std::int64_t> e = primitive_integers(std::span<const F>(&t(r, 0), base_dimension_count));
+      const std::vector<std::int64_t> e = primitive_integer_vector(std::span<const F>(&t(r, 0), base_dimension_count));
       out.spanning.push_back(dimension{e[0], e[1], e[2], e[3], e[4], e[5], e[6]});
     }
   } catch (const integers_too_large&) {

@@ -103,7 +103,7 @@ std::vector<std::size_t> reduce_to_echelon(exact_matrix<F>& m) {
 /// (all zeros stay zeros).
 /// \throws rational_overflow (int64 field) when an intermediate does not fit;
 ///         integers_too_large (multiprecision field) when a result does not fit in int64.
-inline std::vector<std::int64_t> primitive_integers(std::span<const rational> v) {
+inline std::vector<std::int64_t> primitive_integer_vector(std::span<const rational> v) {
   std::int64_t l = 1;
   for (const auto& x : v) {
     if (x.is_zero()) continue;
@@ -121,7 +121,7 @@ inline std::vector<std::int64_t> primitive_integers(std::span<const rational> v)
   return out;
 }
 
-inline std::vector<std::int64_t> primitive_integers(std::span<const big_rational> v) {
+inline std::vector<std::int64_t> primitive_integer_vector(std::span<const big_rational> v) {
   big_integer l = 1;
   for (const auto& x : v) {
     if (x.is_zero()) continue;
