@@ -54,7 +54,7 @@ void compare() {
 
 TEST_SUITE("analysis compile time") {
   TEST_CASE("analyze() and pi_basis() agree on every shared textbook problem") {
-    textbook::for_each_problem([]<const auto& P>() { compare<P>(); });
+    textbook::for_each_problem([]<const auto & P>() { compare<P>(); });
     CHECK(compared == textbook::all_problems.size());
   }
 }

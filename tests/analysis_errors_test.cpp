@@ -24,12 +24,17 @@ analysis_error caught(Fn&& f) {
   return analysis_error("");
 }
 
-bool contains(const std::string& s, const std::string& part) { return s.find(part) != std::string::npos; }
+bool contains(const std::string& s, const std::string& part) {
+  return s.find(part) != std::string::npos;
+}
 
 /// Drag on a sphere (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory).
 problem sphere_drag() {
   problem p;
-  p.add("F", dims::force).add("rho", dims::density).add("U", dims::velocity).add("D", dims::length)
+  p.add("F", dims::force)
+      .add("rho", dims::density)
+      .add("U", dims::velocity)
+      .add("D", dims::length)
       .add("mu", dims::dynamic_viscosity);
   return p;
 }
@@ -105,7 +110,10 @@ TEST_SUITE("analysis errors") {
   TEST_CASE("repeating variables with dependent dimensions: the first dependent one is named with its combination") {
     // eps and d are both lengths (rough pipe, White, Fluid Mechanics, 7th ed., Sec. 6.6)
     problem p;
-    p.add("dp", dims::pressure).add("rho", dims::density).add("V", dims::velocity).add("d", dims::length)
+    p.add("dp", dims::pressure)
+        .add("rho", dims::density)
+        .add("V", dims::velocity)
+        .add("d", dims::length)
         .add("eps", dims::length);
     const auto e = caught([&] { (void)analyze(p, repeating({"d", "eps", "rho"})); });
     CHECK(contains(e.what(), "independent dimensions, but that of 'eps' (L) is the dimension of d,"));
@@ -113,8 +121,7 @@ TEST_SUITE("analysis errors") {
 
     // a velocity is a length over a time (SI Brochure 9th ed., table 4: m s^-1)
     problem q;
-    q.add("F", dims::force).add("D", dims::length).add("t", dims::time).add("U", dims::velocity)
-        .add("m", dims::mass);
+    q.add("F", dims::force).add("D", dims::length).add("t", dims::time).add("U", dims::velocity).add("m", dims::mass);
     const auto f = caught([&] { (void)analyze(q, repeating({"D", "t", "U"})); });
     CHECK(contains(f.what(), "that of 'U' (L T^-1) is the dimension of D*t^-1"));
     CHECK(f.variable() == "U");

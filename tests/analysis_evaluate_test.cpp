@@ -17,13 +17,17 @@ std::atomic<std::size_t> allocations{0};
 }  // namespace
 
 // Count every allocation of the test program, to show that field evaluation makes none.
-void* operator new(std::size_t size) {
+[[gnu::noinline]] void* operator new(std::size_t size) {
   ++allocations;
   if (void* p = std::malloc(size == 0 ? 1 : size)) return p;
   throw std::bad_alloc();
 }
-void operator delete(void* p) noexcept { std::free(p); }
-void operator delete(void* p, std::size_t) noexcept { std::free(p); }
+[[gnu::noinline]] void operator delete(void* p) noexcept {
+  std::free(p);
+}
+[[gnu::noinline]] void operator delete(void* p, std::size_t) noexcept {
+  std::free(p);
+}
 
 using namespace nondim;
 
@@ -33,7 +37,10 @@ namespace {
 /// groups F/(rho U^2 D^2) and mu/(rho U D) = 1/Re.
 problem sphere_drag() {
   problem p;
-  p.add("F", dims::force).add("rho", dims::density).add("U", dims::velocity).add("D", dims::length)
+  p.add("F", dims::force)
+      .add("rho", dims::density)
+      .add("U", dims::velocity)
+      .add("D", dims::length)
       .add("mu", dims::dynamic_viscosity);
   return p;
 }
@@ -95,7 +102,8 @@ TEST_SUITE("analysis evaluation") {
       const std::size_t before = allocations.load();
       g.evaluate(columns, out);
       CHECK(allocations.load() == before);  // no allocation at all, let alone per cell
-      for (std::size_t c = 0; c < cells; c += 97) CHECK(out[c] == g.value(std::vector<double>{F[c], rho[c], U[c], D[c], mu[c]}));
+      for (std::size_t c = 0; c < cells; c += 97)
+        CHECK(out[c] == g.value(std::vector<double>{F[c], rho[c], U[c], D[c], mu[c]}));
     }
   }
 

@@ -85,10 +85,16 @@ TEST_SUITE("analysis exact arithmetic") {
     // drag on a sphere (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory) and the
     // blast wave with ambient pressure (Taylor, Proc. R. Soc. A 201, 1950)
     problem drag;
-    drag.add("F", dims::force).add("rho", dims::density).add("U", dims::velocity).add("D", dims::length)
+    drag.add("F", dims::force)
+        .add("rho", dims::density)
+        .add("U", dims::velocity)
+        .add("D", dims::length)
         .add("mu", dims::dynamic_viscosity);
     problem blast;
-    blast.add("R", dims::length).add("E", dims::energy).add("rho", dims::density).add("t", dims::time)
+    blast.add("R", dims::length)
+        .add("E", dims::energy)
+        .add("rho", dims::density)
+        .add("t", dims::time)
         .add("p0", dims::pressure);
     options big;
     big.arithmetic = exact_arithmetic::multiprecision;
@@ -150,7 +156,8 @@ TEST_SUITE("analysis exact arithmetic") {
     // Noise density in V/sqrt(Hz): V_rms = e_n sqrt(B) (common practice; e.g. Horowitz & Hill,
     // The Art of Electronics, 3rd ed., Ch. 8, from memory): the group is V_rms^2 / (e_n^2 B).
     problem p;
-    p.add("V_rms", dims::voltage).add("e_n", dims::voltage / pow(dims::frequency, rational{1, 2}))
+    p.add("V_rms", dims::voltage)
+        .add("e_n", dims::voltage / pow(dims::frequency, rational{1, 2}))
         .add("B", dims::frequency);
     const analysis an = analyze(p, test_support::repeating({"e_n", "B"}));
     check_groups(an, {expected_group{{"V_rms", 2}, {"e_n", -2}, {"B", -1}}});

@@ -10,7 +10,9 @@ using test_support::check_groups;
 using test_support::expected_group;
 
 namespace {
-bool contains(const std::string& s, const std::string& part) { return s.find(part) != std::string::npos; }
+bool contains(const std::string& s, const std::string& part) {
+  return s.find(part) != std::string::npos;
+}
 }  // namespace
 
 TEST_SUITE("analysis problem") {

@@ -68,7 +68,8 @@ class generator {
     }
     if (kind == 2 && n >= 3) {
       // later columns are small integer combinations of the first few
-      const std::size_t basis = static_cast<std::size_t>(uniform(1, static_cast<std::int64_t>(std::min<std::size_t>(n - 1, 4))));
+      const std::size_t basis =
+          static_cast<std::size_t>(uniform(1, static_cast<std::int64_t>(std::min<std::size_t>(n - 1, 4))));
       for (std::size_t j = basis; j < n; ++j) {
         if (!chance(70)) continue;
         dimension s{};
@@ -79,8 +80,10 @@ class generator {
     if (kind == 3) {
       // dimensionless inputs and repeated dimensions
       for (std::size_t j = 0; j < n; ++j) {
-        if (chance(15)) rc.dims[j] = dimension{};
-        else if (j > 0 && chance(15)) rc.dims[j] = rc.dims[static_cast<std::size_t>(uniform(0, static_cast<std::int64_t>(j) - 1))];
+        if (chance(15))
+          rc.dims[j] = dimension{};
+        else if (j > 0 && chance(15))
+          rc.dims[j] = rc.dims[static_cast<std::size_t>(uniform(0, static_cast<std::int64_t>(j) - 1))];
       }
     }
     rc.dependent = static_cast<std::size_t>(uniform(0, static_cast<std::int64_t>(n) - 1));
@@ -92,8 +95,10 @@ class generator {
       std::vector<dimension> chosen;
       for (std::size_t j : idx) {
         chosen.push_back(rc.dims[j]);
-        if (rank_of(chosen) == chosen.size()) rc.given.push_back(j);
-        else chosen.pop_back();
+        if (rank_of(chosen) == chosen.size())
+          rc.given.push_back(j);
+        else
+          chosen.pop_back();
       }
     }
     return rc;
@@ -129,8 +134,10 @@ std::vector<std::size_t> automatic_choice(const std::vector<dimension>& dims, st
   std::vector<dimension> chosen;
   for (std::size_t j : order) {
     chosen.push_back(dims[j]);
-    if (rank_of(chosen) == chosen.size()) taken.push_back(j);
-    else chosen.pop_back();
+    if (rank_of(chosen) == chosen.size())
+      taken.push_back(j);
+    else
+      chosen.pop_back();
   }
   std::sort(taken.begin(), taken.end());
   return taken;
@@ -170,8 +177,10 @@ TEST_SUITE("analysis properties") {
         rep_dims.push_back(rc.dims[rep.back()]);
       }
       CHECK(rank_of(rep_dims) == rank);
-      if (rc.given.empty()) CHECK(rep == automatic_choice(rc.dims, rc.dependent));
-      else CHECK(rep == rc.given);
+      if (rc.given.empty())
+        CHECK(rep == automatic_choice(rc.dims, rc.dependent));
+      else
+        CHECK(rep == rc.given);
 
       // every group: dimensionless exactly, primitive, classical form, ordered by its variable
       std::vector<std::vector<big>> vectors;
@@ -253,8 +262,8 @@ TEST_SUITE("analysis properties") {
     }
     // the sample covers what it claims to (counts depend only on the fixed seed)
     MESSAGE("deficient " << deficient << ", isolated " << with_isolated << ", given " << with_given
-                         << ", dimensionless " << with_dimensionless << ", rational " << with_rational
-                         << ", no groups " << no_groups);
+                         << ", dimensionless " << with_dimensionless << ", rational " << with_rational << ", no groups "
+                         << no_groups);
     CHECK(deficient >= 100);
     CHECK(with_isolated >= 100);
     CHECK(with_given >= 300);

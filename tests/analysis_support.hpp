@@ -44,7 +44,9 @@ std::size_t rank_in(std::vector<std::vector<F>> v) {
   return rank;
 }
 
-inline std::size_t rank_of(const std::vector<std::vector<big>>& v) { return rank_in(v); }
+inline std::size_t rank_of(const std::vector<std::vector<big>>& v) {
+  return rank_in(v);
+}
 
 /// Rank of a set of dimensions (as vectors of 7 exponents): in checked int64 rationals,
 /// which throw rather than wrap, and in cpp_rational when they overflow.
@@ -101,7 +103,9 @@ inline void check_groups(const nondim::analysis& a, const std::vector<expected_g
   for (const auto& g : a.groups) CHECK(exactly_dimensionless(a.matrix.columns(), g.exponents));
 }
 
-inline std::vector<nondim::dimension> dims_of(const nondim::problem& p) { return p.matrix().columns(); }
+inline std::vector<nondim::dimension> dims_of(const nondim::problem& p) {
+  return p.matrix().columns();
+}
 
 }  // namespace test_support
 

@@ -10,7 +10,9 @@ using namespace nondim;
 
 namespace {
 
-bool contains(const std::string& s, const std::string& part) { return s.find(part) != std::string::npos; }
+bool contains(const std::string& s, const std::string& part) {
+  return s.find(part) != std::string::npos;
+}
 
 bool pure_ascii(const std::string& s) {
   for (const char c : s)
@@ -21,7 +23,10 @@ bool pure_ascii(const std::string& s) {
 /// Drag on a sphere with rho, U, D repeating (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory).
 analysis sphere_drag() {
   problem p;
-  p.add("F", dims::force).add("rho", dims::density).add("U", dims::velocity).add("D", dims::length)
+  p.add("F", dims::force)
+      .add("rho", dims::density)
+      .add("U", dims::velocity)
+      .add("D", dims::length)
       .add("mu", dims::dynamic_viscosity);
   return analyze(p, test_support::repeating({"rho", "U", "D"}));
 }
@@ -54,7 +59,7 @@ TEST_SUITE("analysis text") {
     CHECK(display_name("Delta") == "\u0394");
     CHECK(display_name("rho_w") == "\u03c1_w");
     CHECK(display_name("mu2") == "\u03bc2");
-    CHECK(display_name("rhoX") == "rhoX");     // not a Greek spelling followed by _ or a digit
+    CHECK(display_name("rhoX") == "rhoX");  // not a Greek spelling followed by _ or a digit
     CHECK(display_name("muscle") == "muscle");
     CHECK(display_name("D") == "D");
     CHECK(display_name("rho", text_form::ascii) == "rho");
@@ -84,7 +89,10 @@ TEST_SUITE("analysis text") {
   TEST_CASE("the text of a deficient, isolating analysis explains both, in ASCII too") {
     // RC circuit (tau = R C, common practice) with the voltage, which no group can contain
     problem p;
-    p.add("t", dims::time).add("R", dims::resistance).add("C", dims::capacitance).add("V", dims::voltage)
+    p.add("t", dims::time)
+        .add("R", dims::resistance)
+        .add("C", dims::capacitance)
+        .add("V", dims::voltage)
         .add("Theta_0", dims::temperature);
     const analysis a = analyze(p);
     const std::string s = to_string(a, text_form::ascii);
@@ -132,7 +140,10 @@ TEST_SUITE("analysis text") {
 
   TEST_CASE("the named basis is accepted and, until the catalog exists, gives the classical groups") {
     problem p;
-    p.add("F", dims::force).add("rho", dims::density).add("U", dims::velocity).add("D", dims::length)
+    p.add("F", dims::force)
+        .add("rho", dims::density)
+        .add("U", dims::velocity)
+        .add("D", dims::length)
         .add("mu", dims::dynamic_viscosity);
     options o;
     o.form = basis::named;

@@ -7,6 +7,7 @@
 #include "quantity.hpp"
 
 #include "analysis/analyze.hpp"
+#include "analysis/compile_time.hpp"
 #include "analysis/error.hpp"
 #include "analysis/matrix.hpp"
 #include "analysis/null_space.hpp"
@@ -17,4 +18,3 @@
 #include "analysis/svd_check.hpp"
 #include "analysis/symbols.hpp"
 #include "analysis/text.hpp"
-#include "analysis/compile_time.hpp"

@@ -64,8 +64,12 @@ std::vector<dimension> huge_matrix() {
 
 std::string json_vector(const std::vector<std::int64_t>& v) {
   std::string s = "[";
-  for (std::size_t i = 0; i < v.size(); ++i) s += (i ? "," : "") + std::to_string(v[i]);
-  return s + "]";
+  for (std::size_t i = 0; i < v.size(); ++i) {
+    if (i > 0) s.push_back(',');
+    s.append(std::to_string(v[i]));
+  }
+  s.push_back(']');
+  return s;
 }
 
 void print_case(std::size_t id, const std::vector<dimension>& cols) {
@@ -76,16 +80,29 @@ void print_case(std::size_t id, const std::vector<dimension>& cols) {
   std::string s = "{\"id\":" + std::to_string(id) + ",\"matrix\":[";
   for (std::size_t i = 0; i < 7; ++i) {
     s += i ? ",[" : "[";
-    for (std::size_t j = 0; j < cols.size(); ++j) s += (j ? ",\"" : "\"") + nondim::to_string(cols[j][i]) + "\"";
+    for (std::size_t j = 0; j < cols.size(); ++j) {
+      s.append(j ? ",\"" : "\"");
+      s.append(nondim::to_string(cols[j][i]));
+      s.push_back('"');
+    }
     s += "]";
   }
   s += "],\"rank\":" + std::to_string(a.rank) + ",\"multiprecision\":" + (a.multiprecision ? "true" : "false");
   s += ",\"groups\":[";
-  for (std::size_t k = 0; k < a.groups.size(); ++k) s += (k ? "," : "") + json_vector(a.groups[k].exponents);
+  for (std::size_t k = 0; k < a.groups.size(); ++k) {
+    if (k > 0) s.push_back(',');
+    s.append(json_vector(a.groups[k].exponents));
+  }
   s += "],\"pivots\":[";
-  for (std::size_t k = 0; k < ns.pivots.size(); ++k) s += (k ? "," : "") + std::to_string(ns.pivots[k]);
+  for (std::size_t k = 0; k < ns.pivots.size(); ++k) {
+    if (k > 0) s.push_back(',');
+    s.append(std::to_string(ns.pivots[k]));
+  }
   s += "],\"null_space\":[";
-  for (std::size_t k = 0; k < ns.vectors.size(); ++k) s += (k ? "," : "") + json_vector(ns.vectors[k]);
+  for (std::size_t k = 0; k < ns.vectors.size(); ++k) {
+    if (k > 0) s.push_back(',');
+    s.append(json_vector(ns.vectors[k]));
+  }
   s += "]}";
   std::cout << s << '\n';
 }

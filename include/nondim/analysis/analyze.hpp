@@ -14,6 +14,7 @@
 
 #include "../core/dimension.hpp"
 #include "../core/format.hpp"
+#include "detail/cat.hpp"
 #include "detail/core.hpp"
 #include "error.hpp"
 #include "options.hpp"
@@ -65,21 +66,21 @@ inline std::vector<std::string> unique_bases(const std::vector<variable>& vars, 
 /// can appear in no group.
 inline std::string isolation_reason(const std::vector<variable>& vars, std::size_t j, bool is_dependent,
                                     text_form form = text_form::ascii) {
-  const std::string name = "'" + vars[j].name + "'";
+  const std::string name = cat({"'", vars[j].name, "'"});
   const std::vector<std::string> alone = unique_bases(vars, j, form);
   const std::string dim = dimension_product(vars[j].dim, form);
   std::string why;
   if (!alone.empty())
-    why = std::string(alone.size() == 1 ? "its base dimension " : "its base dimensions ") + spoken_list(alone) +
-          (alone.size() == 1 ? " appears" : " appear") + " in no other variable";
+    why = cat({alone.size() == 1 ? "its base dimension " : "its base dimensions ", spoken_list(alone),
+               alone.size() == 1 ? " appears" : " appear", " in no other variable"});
   else
-    why = "no product of powers of the other variables has its dimension " + dim;
+    why = cat({"no product of powers of the other variables has its dimension ", dim});
   if (is_dependent)
-    return name + " is the dependent variable, but " + why +
-           ", so no group can contain it: a variable is missing from the problem" +
-           (alone.empty() ? std::string{} : " (one whose dimension involves " + spoken_list(alone) + ")");
-  return why + ", so no group can contain " + name +
-         ": either it does not affect the result (as the mass of a pendulum) or a variable is missing";
+    return cat({name, " is the dependent variable, but ", why,
+                ", so no group can contain it: a variable is missing from the problem",
+                alone.empty() ? std::string{} : cat({" (one whose dimension involves ", spoken_list(alone), ")"})});
+  return cat({why, ", so no group can contain ", name,
+              ": either it does not affect the result (as the mass of a pendulum) or a variable is missing"});
 }
 
 /// \brief The sentence that explains a rank below the count of base dimensions present.
@@ -99,13 +100,13 @@ inline std::string explain_deficiency(std::size_t rank, const rank_deficiency& d
   std::vector<std::string> tied;
   for (std::size_t i = 0; i < base_dimension_count; ++i)
     if (involved[i]) tied.emplace_back(dimension_symbol(i, form));
-  std::string s = "rank " + std::to_string(rank) + " is less than the " + std::to_string(d.present.size()) +
-                  " base dimensions that appear (" + spoken_list(present) + "): ";
-  if (d.too_large) return s + "they appear only in fixed combinations whose exponents exceed 64 bits";
-  s += "every variable's dimension is a product of powers of " + spoken_list(spanned);
+  std::string s = cat({"rank ", std::to_string(rank), " is less than the ", std::to_string(d.present.size()),
+                       " base dimensions that appear (", spoken_list(present), "): "});
+  if (d.too_large) return s.append("they appear only in fixed combinations whose exponents exceed 64 bits");
+  s.append("every variable's dimension is a product of powers of ").append(spoken_list(spanned));
   if (!combos.empty())
-    s += ", so " + spoken_list(tied) + " appear only in the fixed combination" + (combos.size() == 1 ? " " : "s ") +
-         spoken_list(combos);
+    s.append(cat({", so ", spoken_list(tied), " appear only in the fixed combination", combos.size() == 1 ? " " : "s ",
+                  spoken_list(combos)}));
   return s;
 }
 
@@ -119,19 +120,21 @@ inline analysis classical_analysis(const problem& p, const options& o) {
   std::size_t dependent = 0;
   if (!o.dependent.empty()) {
     const auto d = p.index_of(o.dependent);
-    if (!d) throw analysis_error("nondim: the dependent variable '" + o.dependent + "' is not in the problem", o.dependent);
+    if (!d)
+      throw analysis_error(cat({"nondim: the dependent variable '", o.dependent, "' is not in the problem"}),
+                           o.dependent);
     dependent = *d;
   }
 
   std::vector<std::size_t> given;
   for (const auto& r : o.repeating) {
     const auto j = p.index_of(r);
-    if (!j) throw analysis_error("nondim: repeating variable '" + r + "' is not in the problem", r);
+    if (!j) throw analysis_error(cat({"nondim: repeating variable '", r, "' is not in the problem"}), r);
     if (std::find(given.begin(), given.end(), *j) != given.end())
-      throw analysis_error("nondim: repeating variable '" + r + "' is given twice", r);
+      throw analysis_error(cat({"nondim: repeating variable '", r, "' is given twice"}), r);
     if (vars[*j].dim.is_dimensionless())
-      throw analysis_error("nondim: repeating variable '" + r +
-                               "' is dimensionless; it cannot be repeating (it is a group by itself)",
+      throw analysis_error(cat({"nondim: repeating variable '", r,
+                                "' is dimensionless; it cannot be repeating (it is a group by itself)"}),
                            r);
     given.push_back(*j);
   }
@@ -145,9 +148,8 @@ inline analysis classical_analysis(const problem& p, const options& o) {
     names.push_back(v.name);
   }
 
-  const detail::exact_outcome x = detail::run_exact(o.arithmetic, [&]<class F>() {
-    return detail::exact_core<F>(dims, names, given, dependent);
-  });
+  const detail::exact_outcome x =
+      detail::run_exact(o.arithmetic, [&]<class F>() { return detail::exact_core<F>(dims, names, given, dependent); });
 
   analysis a;
   a.rank = x.rank;
@@ -180,11 +182,11 @@ inline analysis classical_analysis(const problem& p, const options& o) {
   a.deficiency.explanation = explain_deficiency(a.rank, a.deficiency);
 
   if (a.missing_variable)
-    a.notes.push_back("a variable is missing: the dependent variable '" + a.dependent +
-                      "' cannot be made dimensionless with the others");
+    a.notes.push_back(cat({"a variable is missing: the dependent variable '", a.dependent,
+                           "' cannot be made dimensionless with the others"}));
   if (a.repeating_given && repeating[dependent])
-    a.notes.push_back("the dependent variable '" + a.dependent +
-                      "' is repeating, so it may appear in several groups");
+    a.notes.push_back(
+        cat({"the dependent variable '", a.dependent, "' is repeating, so it may appear in several groups"}));
   if (a.deficiency.deficient) a.notes.push_back(a.deficiency.explanation);
   return a;
 }
@@ -218,8 +220,8 @@ inline analysis analyze(const problem& p, const options& o = {}) {
   }
   a.svd = check_with_svd(a.matrix, a.groups, a.rank);
   if (!a.svd.agrees)
-    a.notes.push_back("the SVD in double finds rank " + std::to_string(a.svd.rank) + ", the exact rank is " +
-                      std::to_string(a.rank) + ": the dimension matrix is numerically ill-conditioned");
+    a.notes.push_back(detail::cat({"the SVD in double finds rank ", std::to_string(a.svd.rank), ", the exact rank is ",
+                                   std::to_string(a.rank), ": the dimension matrix is numerically ill-conditioned"}));
   return a;
 }
 

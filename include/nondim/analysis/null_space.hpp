@@ -9,6 +9,7 @@
 #include <string>
 #include <vector>
 
+#include "detail/cat.hpp"
 #include "detail/core.hpp"
 #include "detail/exact.hpp"
 #include "error.hpp"
@@ -55,8 +56,8 @@ inline null_space_basis exact_null_space(const dimension_matrix& a,
       try {
         out.vectors.push_back(detail::primitive_integer_vector(std::span<const F>(x)));
       } catch (const detail::integers_too_large& e) {
-        throw analysis_error("nondim: the null vector of column " + std::to_string(c + 1) +
-                             " needs an exponent beyond 64 bits (" + e.example + ")");
+        throw analysis_error(detail::cat({"nondim: the null vector of column ", std::to_string(c + 1),
+                                          " needs an exponent beyond 64 bits (", e.example, ")"}));
       }
     }
     return out;

@@ -12,6 +12,7 @@
 
 #include "../core/format.hpp"
 #include "../core/rational.hpp"
+#include "detail/cat.hpp"
 #include "error.hpp"
 #include "symbols.hpp"
 
@@ -81,8 +82,8 @@ struct pi_group {
   /// \throws analysis_error when `si_values` does not have one value per variable.
   [[nodiscard]] double value(std::span<const double> si_values) const {
     if (si_values.size() != exponents.size())
-      throw analysis_error("nondim: " + std::to_string(si_values.size()) + " values given for a group of " +
-                           std::to_string(exponents.size()) + " variables");
+      throw analysis_error(detail::cat({"nondim: ", std::to_string(si_values.size()), " values given for a group of ",
+                                        std::to_string(exponents.size()), " variables"}));
     double r = 1.0;
     for (std::size_t i = 0; i < exponents.size(); ++i)
       if (exponents[i] != 0) r = detail::apply_factor(r, si_values[i], exponents[i]);
@@ -93,19 +94,19 @@ struct pi_group {
   /// e.g. `std::map<std::string, double>`); only the variables in the group are needed.
   /// \throws analysis_error naming the first variable of the group without a value.
   template <class Map>
-    requires requires(const Map& m, const std::string& k) {
-      m.find(k) != m.end();
-      static_cast<double>(m.find(k)->second);
-    }
+  requires requires(const Map& m, const std::string& k) {
+    m.find(k) != m.end();
+    static_cast<double>(m.find(k)->second);
+  }
   [[nodiscard]] double value(const Map& si_values) const {
     double r = 1.0;
     for (std::size_t i = 0; i < exponents.size(); ++i) {
       if (exponents[i] == 0) continue;
       const auto it = si_values.find(variables[i]);
       if (it == si_values.end())
-        throw analysis_error("nondim: no value for variable '" + variables[i] + "' of the group " +
-                                 text(text_form::ascii),
-                             variables[i]);
+        throw analysis_error(
+            detail::cat({"nondim: no value for variable '", variables[i], "' of the group ", text(text_form::ascii)}),
+            variables[i]);
       r = detail::apply_factor(r, static_cast<double>(it->second), exponents[i]);
     }
     return r;
@@ -121,14 +122,14 @@ struct pi_group {
   ///         column the group needs does not have `out.size()` cells (naming its variable).
   void evaluate(std::span<const std::span<const double>> columns, std::span<double> out) const {
     if (columns.size() != exponents.size())
-      throw analysis_error("nondim: " + std::to_string(columns.size()) + " columns given for a group of " +
-                           std::to_string(exponents.size()) + " variables");
+      throw analysis_error(detail::cat({"nondim: ", std::to_string(columns.size()), " columns given for a group of ",
+                                        std::to_string(exponents.size()), " variables"}));
     for (std::size_t i = 0; i < exponents.size(); ++i)
       if (exponents[i] != 0 && columns[i].size() != out.size())
-        throw analysis_error("nondim: the column of variable '" + variables[i] + "' has " +
-                                 std::to_string(columns[i].size()) + " cells, the output " +
-                                 std::to_string(out.size()),
-                             variables[i]);
+        throw analysis_error(
+            detail::cat({"nondim: the column of variable '", variables[i], "' has ", std::to_string(columns[i].size()),
+                         " cells, the output ", std::to_string(out.size())}),
+            variables[i]);
     for (std::size_t c = 0; c < out.size(); ++c) {
       double r = 1.0;
       for (std::size_t i = 0; i < exponents.size(); ++i)

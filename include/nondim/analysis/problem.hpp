@@ -14,6 +14,7 @@
 #include "../core/format.hpp"
 #include "../parse/errors.hpp"
 #include "../parse/unit_parser.hpp"
+#include "detail/cat.hpp"
 #include "error.hpp"
 #include "matrix.hpp"
 
@@ -65,7 +66,7 @@ class problem {
       std::string why = e.what();
       if (why.rfind("nondim: ", 0) == 0) why.erase(0, 8);
       std::throw_with_nested(analysis_error(
-          "nondim: variable '" + name + "' has a unit that cannot be read ('" + std::string(unit_text) + "'): " + why,
+          detail::cat({"nondim: variable '", name, "' has a unit that cannot be read ('", unit_text, "'): ", why}),
           name, e.column()));
     }
     variables_.push_back(variable{std::move(name), u.dim, std::string(unit_text), u.factor, u.offset});
@@ -104,9 +105,10 @@ class problem {
  private:
   void check_name(const std::string& name) const {
     if (name.find_first_not_of(" \t\r\n") == std::string::npos)
-      throw analysis_error("nondim: variable " + std::to_string(variables_.size() + 1) +
-                           " of the problem has an empty name");
-    if (index_of(name)) throw analysis_error("nondim: variable '" + name + "' is already in the problem", name);
+      throw analysis_error(detail::cat(
+          {"nondim: variable ", std::to_string(variables_.size() + 1), " of the problem has an empty name"}));
+    if (index_of(name))
+      throw analysis_error(detail::cat({"nondim: variable '", name, "' is already in the problem"}), name);
   }
 
   std::vector<variable> variables_;

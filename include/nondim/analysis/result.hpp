@@ -28,34 +28,34 @@ namespace nondim {
 /// combine several base dimensions (force, stiffness and displacement span L and M·T⁻²):
 /// those base dimensions appear only in fixed combinations.
 struct rank_deficiency {
-  bool deficient = false;                ///< rank < present.size()
-  std::vector<std::size_t> present;      ///< base dimensions (0..6, L M T I Θ N J) that appear
-  std::vector<dimension> spanned;        ///< rank of them
-  std::vector<dimension> combinations;   ///< the elements of `spanned` with more than one base dimension
-  bool too_large = false;  ///< `spanned` would need exponents beyond 64 bits: it and `combinations` are empty
-  std::string explanation;               ///< one ASCII sentence; empty when not deficient
+  bool deficient = false;               ///< rank < present.size()
+  std::vector<std::size_t> present;     ///< base dimensions (0..6, L M T I Θ N J) that appear
+  std::vector<dimension> spanned;       ///< rank of them
+  std::vector<dimension> combinations;  ///< the elements of `spanned` with more than one base dimension
+  bool too_large = false;   ///< `spanned` would need exponents beyond 64 bits: it and `combinations` are empty
+  std::string explanation;  ///< one ASCII sentence; empty when not deficient
 
   friend bool operator==(const rank_deficiency&, const rank_deficiency&) = default;
 };
 
 /// \brief The result of `analyze()`.
 struct analysis {
-  std::size_t rank = 0;                 ///< exact rank of the dimension matrix
-  std::vector<std::string> repeating;   ///< as given, or the automatic choice in input order
-  std::vector<pi_group> groups;         ///< n - rank of them, by input position of their non-repeating variable
-  std::vector<std::string> isolated;    ///< variables that can appear in no group, in input order
+  std::size_t rank = 0;                ///< exact rank of the dimension matrix
+  std::vector<std::string> repeating;  ///< as given, or the automatic choice in input order
+  std::vector<pi_group> groups;        ///< n - rank of them, by input position of their non-repeating variable
+  std::vector<std::string> isolated;   ///< variables that can appear in no group, in input order
 
   std::vector<std::string> isolated_reasons;  ///< one ASCII sentence per isolated variable
   std::vector<variable> variables;            ///< the problem's variables, in order
   dimension_matrix matrix;                    ///< 7 x n, columns in input order
   std::string dependent;                      ///< the dependent variable
   bool repeating_given = false;               ///< the repeating variables came from the options
-  bool missing_variable = false;  ///< the dependent variable is isolated: the problem lacks a variable
+  bool missing_variable = false;              ///< the dependent variable is isolated: the problem lacks a variable
   rank_deficiency deficiency;
   svd_check svd;
-  basis form = basis::classical;  ///< the basis the groups are in
-  bool multiprecision = false;    ///< the int64 elimination overflowed (or was bypassed): cpp_rational gave the result
-  std::vector<std::string> notes; ///< remarks worth showing the user (ASCII sentences)
+  basis form = basis::classical;   ///< the basis the groups are in
+  bool multiprecision = false;     ///< the int64 elimination overflowed (or was bypassed): cpp_rational gave the result
+  std::vector<std::string> notes;  ///< remarks worth showing the user (ASCII sentences)
 
   /// \brief The variable names, in order.
   [[nodiscard]] std::vector<std::string> names() const {
@@ -88,10 +88,10 @@ struct analysis {
   /// \brief Every group's value from SI values by name.
   /// \throws analysis_error naming a variable without a value.
   template <class Map>
-    requires requires(const Map& m, const std::string& k) {
-      m.find(k) != m.end();
-      static_cast<double>(m.find(k)->second);
-    }
+  requires requires(const Map& m, const std::string& k) {
+    m.find(k) != m.end();
+    static_cast<double>(m.find(k)->second);
+  }
   [[nodiscard]] std::vector<double> values(const Map& si_values) const {
     std::vector<double> v;
     v.reserve(groups.size());

@@ -21,11 +21,11 @@ namespace nondim {
 /// A disagreement is data, not an error: it flags a matrix so ill-conditioned that a
 /// floating-point null space would have given another count of groups.
 struct svd_check {
-  std::size_t rank = 0;                ///< numerical rank: singular values above `tolerance`
-  bool agrees = true;                  ///< `rank` equals the exact rank
-  std::vector<double> singular_values; ///< descending, min(7, n) of them
-  double max_residual = 0.0;           ///< max over the groups of |A v|₂ / |v|₂
-  double tolerance = 0.0;              ///< max(7, n) · ε · σ_max
+  std::size_t rank = 0;                 ///< numerical rank: singular values above `tolerance`
+  bool agrees = true;                   ///< `rank` equals the exact rank
+  std::vector<double> singular_values;  ///< descending, min(7, n) of them
+  double max_residual = 0.0;            ///< max over the groups of |A v|₂ / |v|₂
+  double tolerance = 0.0;               ///< max(7, n) · ε · σ_max
 
   friend bool operator==(const svd_check&, const svd_check&) = default;
 };

@@ -17,15 +17,13 @@ namespace detail {
 
 /// ASCII spelling -> Greek letter (ISO 80000-1 uses these letters as quantity symbols).
 inline constexpr std::array<std::pair<std::string_view, std::string_view>, 35> greek_letters{{
-    {"alpha", "\u03b1"},  {"beta", "\u03b2"},   {"gamma", "\u03b3"}, {"delta", "\u03b4"},
-    {"epsilon", "\u03b5"}, {"eps", "\u03b5"},   {"zeta", "\u03b6"},  {"eta", "\u03b7"},
-    {"theta", "\u03b8"},  {"iota", "\u03b9"},   {"kappa", "\u03ba"}, {"lambda", "\u03bb"},
-    {"mu", "\u03bc"},     {"nu", "\u03bd"},     {"xi", "\u03be"},    {"pi", "\u03c0"},
-    {"rho", "\u03c1"},    {"sigma", "\u03c3"},  {"tau", "\u03c4"},   {"upsilon", "\u03c5"},
-    {"phi", "\u03c6"},    {"chi", "\u03c7"},    {"psi", "\u03c8"},   {"omega", "\u03c9"},
-    {"Gamma", "\u0393"},  {"Delta", "\u0394"},  {"Theta", "\u0398"}, {"Lambda", "\u039b"},
-    {"Xi", "\u039e"},     {"Pi", "\u03a0"},     {"Sigma", "\u03a3"}, {"Upsilon", "\u03a5"},
-    {"Phi", "\u03a6"},    {"Psi", "\u03a8"},    {"Omega", "\u03a9"},
+    {"alpha", "\u03b1"}, {"beta", "\u03b2"},    {"gamma", "\u03b3"},  {"delta", "\u03b4"}, {"epsilon", "\u03b5"},
+    {"eps", "\u03b5"},   {"zeta", "\u03b6"},    {"eta", "\u03b7"},    {"theta", "\u03b8"}, {"iota", "\u03b9"},
+    {"kappa", "\u03ba"}, {"lambda", "\u03bb"},  {"mu", "\u03bc"},     {"nu", "\u03bd"},    {"xi", "\u03be"},
+    {"pi", "\u03c0"},    {"rho", "\u03c1"},     {"sigma", "\u03c3"},  {"tau", "\u03c4"},   {"upsilon", "\u03c5"},
+    {"phi", "\u03c6"},   {"chi", "\u03c7"},     {"psi", "\u03c8"},    {"omega", "\u03c9"}, {"Gamma", "\u0393"},
+    {"Delta", "\u0394"}, {"Theta", "\u0398"},   {"Lambda", "\u039b"}, {"Xi", "\u039e"},    {"Pi", "\u03a0"},
+    {"Sigma", "\u03a3"}, {"Upsilon", "\u03a5"}, {"Phi", "\u03a6"},    {"Psi", "\u03a8"},   {"Omega", "\u03a9"},
 }};
 
 /// Number of Unicode code points in UTF-8 text (its width in a terminal for the
@@ -49,7 +47,7 @@ inline std::string display_name(std::string_view name, text_form form = text_for
   while (end < name.size() && name[end] != '_' && (name[end] < '0' || name[end] > '9')) ++end;
   const std::string_view head = name.substr(0, end);
   for (const auto& [ascii, letter] : detail::greek_letters)
-    if (head == ascii) return std::string(letter) + std::string(name.substr(end));
+    if (head == ascii) return std::string(letter).append(name.substr(end));
   return std::string(name);
 }
 

@@ -12,6 +12,7 @@
 
 #include "../core/format.hpp"
 #include "analyze.hpp"
+#include "detail/cat.hpp"
 #include "result.hpp"
 #include "symbols.hpp"
 
@@ -21,7 +22,7 @@ namespace detail {
 
 inline std::string pad_left(const std::string& s, std::size_t width) {
   const std::size_t w = display_width(s);
-  return w >= width ? s : std::string(width - w, ' ') + s;
+  return w >= width ? s : std::string(width - w, ' ').append(s);
 }
 
 inline std::string short_double(double v) {
@@ -68,47 +69,49 @@ inline std::string to_string(const analysis& a, text_form form = text_form::unic
   }
   std::size_t label = 1;
   for (std::size_t i : rows) label = std::max(label, detail::display_width(dimension_symbol(i, form)));
-  s += std::string(label + 2, ' ');
-  for (std::size_t j = 0; j < n; ++j) s += "  " + detail::pad_left(head[j], width[j]);
-  s += '\n';
+  using detail::cat;
+  s.append(label + 2, ' ');
+  for (std::size_t j = 0; j < n; ++j) s.append("  ").append(detail::pad_left(head[j], width[j]));
+  s.push_back('\n');
   for (std::size_t r = 0; r < rows.size(); ++r) {
-    s += "  " + detail::pad_left(std::string(dimension_symbol(rows[r], form)), label);
-    for (std::size_t j = 0; j < n; ++j) s += "  " + detail::pad_left(cells[j][r], width[j]);
-    s += '\n';
+    s.append("  ").append(detail::pad_left(std::string(dimension_symbol(rows[r], form)), label));
+    for (std::size_t j = 0; j < n; ++j) s.append("  ").append(detail::pad_left(cells[j][r], width[j]));
+    s.push_back('\n');
   }
-  if (rows.empty()) s += "  (every variable is dimensionless)\n";
+  if (rows.empty()) s.append("  (every variable is dimensionless)\n");
 
-  s += "rank " + std::to_string(a.rank) + "\n";
-  if (a.deficiency.deficient) s += "  " + detail::explain_deficiency(a.rank, a.deficiency, form) + "\n";
-  s += "dependent " + display_name(a.dependent, form) + "\n";
-  s += "repeating ";
-  for (std::size_t k = 0; k < a.repeating.size(); ++k) s += (k ? ", " : "") + display_name(a.repeating[k], form);
-  if (a.repeating.empty()) s += "none";
-  s += a.repeating_given ? " (given)\n" : " (chosen automatically)\n";
+  s.append(cat({"rank ", std::to_string(a.rank), "\n"}));
+  if (a.deficiency.deficient) s.append(cat({"  ", detail::explain_deficiency(a.rank, a.deficiency, form), "\n"}));
+  s.append(cat({"dependent ", display_name(a.dependent, form), "\n"}));
+  s.append("repeating ");
+  for (std::size_t k = 0; k < a.repeating.size(); ++k)
+    s.append(k ? ", " : "").append(display_name(a.repeating[k], form));
+  if (a.repeating.empty()) s.append("none");
+  s.append(a.repeating_given ? " (given)\n" : " (chosen automatically)\n");
 
-  s += "groups (" + std::to_string(a.groups.size()) + ")\n";
+  s.append(cat({"groups (", std::to_string(a.groups.size()), ")\n"}));
   for (std::size_t k = 0; k < a.groups.size(); ++k)
-    s += std::string("  ") + (uni ? "\u03c0" : "pi") + std::to_string(k + 1) + " = " + a.groups[k].text(form) + "\n";
+    s.append(cat({"  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form), "\n"}));
 
   if (a.isolated.empty()) {
-    s += "isolated: none\n";
+    s.append("isolated: none\n");
   } else {
-    s += "isolated\n";
+    s.append("isolated\n");
     for (std::size_t k = 0; k < a.isolated.size(); ++k) {
       const auto j = a.index_of(a.isolated[k]);
       const std::string reason =
           j ? detail::isolation_reason(a.variables, *j, a.isolated[k] == a.dependent, form) : a.isolated_reasons[k];
-      s += "  " + display_name(a.isolated[k], form) + ": " + reason + "\n";
+      s.append(cat({"  ", display_name(a.isolated[k], form), ": ", reason, "\n"}));
     }
   }
 
-  s += "SVD check: rank " + std::to_string(a.svd.rank) + (a.svd.agrees ? ", agrees" : ", DISAGREES") +
-       "; singular values";
+  s.append(cat({"SVD check: rank ", std::to_string(a.svd.rank), a.svd.agrees ? ", agrees" : ", DISAGREES",
+                "; singular values"}));
   for (std::size_t k = 0; k < a.svd.singular_values.size(); ++k)
-    s += (k ? ", " : " ") + detail::short_double(a.svd.singular_values[k]);
-  s += "; max residual " + detail::short_double(a.svd.max_residual) + "\n";
+    s.append(k ? ", " : " ").append(detail::short_double(a.svd.singular_values[k]));
+  s.append(cat({"; max residual ", detail::short_double(a.svd.max_residual), "\n"}));
   for (const auto& note : a.notes)
-    if (note != a.deficiency.explanation) s += "note: " + note + "\n";
+    if (note != a.deficiency.explanation) s.append(cat({"note: ", note, "\n"}));
   return s;
 }
 

@@ -16,6 +16,7 @@
 #include "../../core/format.hpp"
 #include "../error.hpp"
 #include "../options.hpp"
+#include "cat.hpp"
 #include "exact.hpp"
 
 namespace nondim::detail {
@@ -50,7 +51,10 @@ std::string product_text(const std::vector<std::string>& names, const std::vecto
     s += names[i];
     if (is_one(e[i])) continue;
     const std::string t = to_text(e[i]);
-    s += t.find('/') == std::string::npos ? "^" + t : "^(" + t + ")";
+    const bool fraction = t.find('/') != std::string::npos;
+    s.append(fraction ? "^(" : "^");
+    s.append(t);
+    if (fraction) s.push_back(')');
   }
   return s.empty() ? "1" : s;
 }
@@ -108,11 +112,11 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   if (!given.empty()) {
     if (given.size() != out.rank) {
       std::string list;
-      for (std::size_t g : given) list += (list.empty() ? "" : ", ") + names[g];
-      throw analysis_error("nondim: " + std::to_string(given.size()) + " repeating variable" +
-                           (given.size() == 1 ? "" : "s") + " given (" + list +
-                           ") but the rank of the dimension matrix is " + std::to_string(out.rank) + ", so " +
-                           std::to_string(out.rank) + " are needed");
+      for (std::size_t g : given) list.append(list.empty() ? "" : ", ").append(names[g]);
+      throw analysis_error(
+          cat({"nondim: ", std::to_string(given.size()), " repeating variable", given.size() == 1 ? "" : "s",
+               " given (", list, ") but the rank of the dimension matrix is ", std::to_string(out.rank), ", so ",
+               std::to_string(out.rank), " are needed"}));
     }
     for (std::size_t k = 0; k < given.size(); ++k) {
       if (pivots[k] == k) continue;
@@ -125,9 +129,9 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
         used_e.push_back(m(r, k));
       }
       const std::string& who = names[given[k]];
-      throw analysis_error("nondim: the repeating variables must have independent dimensions, but that of '" +
-                               who + "' (" + to_string(dims[given[k]]) + ") is the dimension of " +
-                               product_text(used, used_e) + ", made of the repeating variables before it",
+      throw analysis_error(cat({"nondim: the repeating variables must have independent dimensions, but that of '", who,
+                                "' (", to_string(dims[given[k]]), ") is the dimension of ", product_text(used, used_e),
+                                ", made of the repeating variables before it"}),
                            who);
     }
   }
@@ -154,8 +158,8 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     try {
       out.groups.push_back(primitive_integer_vector(std::span<const F>(x)));
     } catch (const integers_too_large& e) {
-      throw analysis_error("nondim: the group of '" + names[head] + "' needs an exponent beyond 64 bits (" +
-                               e.example + "); the exact answer cannot be given as int64 exponents",
+      throw analysis_error(cat({"nondim: the group of '", names[head], "' needs an exponent beyond 64 bits (",
+                                e.example, "); the exact answer cannot be given as int64 exponents"}),
                            names[head]);
     }
     out.heads.push_back(head);

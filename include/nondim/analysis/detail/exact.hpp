@@ -14,6 +14,7 @@
 
 #include <boost/multiprecision/cpp_int.hpp>
 
+#include "../../core/format.hpp"
 #include "../../core/rational.hpp"
 
 namespace nondim::detail {
@@ -30,27 +31,44 @@ struct integers_too_large {
 
 // ---- the field operations the elimination needs, for both fields -----------------------
 
-template <class F> F from_rational(const rational& r);
-template <> inline rational from_rational<rational>(const rational& r) { return r; }
-template <> inline big_rational from_rational<big_rational>(const rational& r) {
+template <class F>
+F from_rational(const rational& r);
+template <>
+inline rational from_rational<rational>(const rational& r) {
+  return r;
+}
+template <>
+inline big_rational from_rational<big_rational>(const rational& r) {
   big_rational x = r.num;
   x /= r.den;
   return x;
 }
 
-inline bool is_zero(const rational& x) noexcept { return x.is_zero(); }
-inline bool is_zero(const big_rational& x) { return x.is_zero(); }
-inline bool is_negative(const rational& x) noexcept { return x.num < 0; }
-inline bool is_negative(const big_rational& x) { return x.sign() < 0; }
-inline bool is_one(const rational& x) noexcept { return x.num == 1 && x.den == 1; }
-inline bool is_one(const big_rational& x) { return x == 1; }
+inline bool is_zero(const rational& x) noexcept {
+  return x.is_zero();
+}
+inline bool is_zero(const big_rational& x) {
+  return x.is_zero();
+}
+inline bool is_negative(const rational& x) noexcept {
+  return x.num < 0;
+}
+inline bool is_negative(const big_rational& x) {
+  return x.sign() < 0;
+}
+inline bool is_one(const rational& x) noexcept {
+  return x.num == 1 && x.den == 1;
+}
+inline bool is_one(const big_rational& x) {
+  return x == 1;
+}
 
 inline std::string to_text(const rational& x) {
-  std::string s = std::to_string(x.num);
-  if (x.den != 1) s += "/" + std::to_string(x.den);
-  return s;
+  return to_string(x);
 }
-inline std::string to_text(const big_rational& x) { return x.str(); }
+inline std::string to_text(const big_rational& x) {
+  return x.str();
+}
 
 /// \brief A dense row-major matrix over F.
 template <class F>
