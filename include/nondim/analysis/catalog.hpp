@@ -389,7 +389,7 @@ inline constexpr std::array table{
          catalog_form{"Ta = 4Ω²L⁴ρ²/μ²",
                       {{rotation_rate, 2}, {characteristic_length, 4}, {density, 2}, {dynamic_viscosity, -2}}}},
         "common practice (rotating layers), from memory",
-        "Couette-flow definitions use gap and radius"},
+        "in this form Ta = 4/Ek²; Couette-flow definitions use gap and radius"},
     catalog_entry{"Richardson number",
                   "Ri",
                   momentum_transfer,
