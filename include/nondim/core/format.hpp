@@ -19,8 +19,12 @@ enum class text_form { ascii, unicode };
 
 /// \brief "3", "-1/2".
 inline std::string to_string(const rational& r) {
+  // built by appending only: GCC 12 warns falsely (-Wrestrict) on operator+ of strings
   std::string s = std::to_string(r.num);
-  if (r.den != 1) s += "/" + std::to_string(r.den);
+  if (r.den != 1) {
+    s.push_back('/');
+    s += std::to_string(r.den);
+  }
   return s;
 }
 
@@ -40,23 +44,33 @@ inline constexpr std::array<std::size_t, base_dimension_count> unit_write_order{
 inline std::string superscript_integer(std::int64_t v) {
   static constexpr std::array<std::string_view, 10> digits{"\u2070", "\u00b9", "\u00b2", "\u00b3", "\u2074",
                                                            "\u2075", "\u2076", "\u2077", "\u2078", "\u2079"};
-  std::string s;
+  std::array<std::string_view, 20> reversed{};
+  std::size_t count = 0;
   std::uint64_t m = v < 0 ? 0 - static_cast<std::uint64_t>(v) : static_cast<std::uint64_t>(v);
-  std::string rev;
   do {
-    const std::string_view d = digits[m % 10];
-    rev.insert(0, d);
+    reversed[count++] = digits[m % 10];
     m /= 10;
   } while (m != 0);
-  if (v < 0) s = "\u207b";
-  return s + rev;
+  std::string s;
+  if (v < 0) s.append("\u207b");
+  while (count > 0) s.append(reversed[--count]);
+  return s;
 }
 
 /// Exponent suffix for `symbol^e`; empty when e == 1.
 inline std::string exponent_suffix(const rational& e, text_form form) {
-  if (e == rational{1}) return {};
-  if (e.is_integer()) return form == text_form::unicode ? superscript_integer(e.num) : "^" + std::to_string(e.num);
-  return "^(" + to_string(e) + ")";
+  std::string s;
+  if (e == rational{1}) return s;
+  if (e.is_integer() && form == text_form::unicode) return superscript_integer(e.num);
+  if (e.is_integer()) {
+    s.push_back('^');
+    s += std::to_string(e.num);
+    return s;
+  }
+  s.append("^(");
+  s += to_string(e);
+  s.push_back(')');
+  return s;
 }
 
 }  // namespace detail
@@ -108,8 +122,13 @@ inline std::string si_unit_string(const dimension& d, text_form form = text_form
     if (e.num < 0) ++den_count;
   }
   if (den.empty()) return num;
-  if (num.empty()) num = "1";
-  return den_count > 1 ? num + "/(" + den + ")" : num + "/" + den;
+  std::string out;
+  if (num.empty()) out.push_back('1');
+  out += num;
+  out.append(den_count > 1 ? "/(" : "/");
+  out += den;
+  if (den_count > 1) out.push_back(')');
+  return out;
 }
 
 template <class CharT, class Traits>

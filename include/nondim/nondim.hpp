@@ -1,0 +1,6 @@
+#pragma once
+/// \file nondim.hpp
+/// \brief Everything nondim offers. Solver files that only need checked quantities should
+/// include the cheaper <nondim/quantity.hpp>.
+
+#include "quantity.hpp"
