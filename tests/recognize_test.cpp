@@ -281,4 +281,29 @@ TEST_SUITE("recognize") {
     CHECK(gm[0] == group_match{"Nusselt number", "Nu", 1, true});
     CHECK(gm[1] == group_match{"Biot number", "Bi", 1, true});
   }
+  TEST_CASE("one recogniser for many groups gives the same matches as recognize()") {
+    // the groups of forced convection (Incropera et al., ch. 6, from memory): Nu, 1/Re, Pr, St
+    const std::vector<group_variable> v{{"h", dims::heat_transfer_coefficient},
+                                        {"k", dims::thermal_conductivity},
+                                        {"U", dims::velocity},
+                                        {"D", dims::length},
+                                        {"rho", dims::density},
+                                        {"mu", dims::dynamic_viscosity},
+                                        {"cp", dims::specific_heat_capacity}};
+    const group_recognizer r(v);
+    for (const exps& e : {exps{1, -1, 0, 1, 0, 0, 0}, exps{0, 0, -1, -1, -1, 1, 0}, exps{0, -1, 0, 0, 0, 1, 1},
+                          exps{1, 0, -1, 0, -1, 0, -1}, exps{0, -2, 1, 1, 1, 1, 2}}) {
+      const auto a = recognize(v, e);
+      const auto b = r(e);
+      REQUIRE(a.size() == b.size());
+      for (std::size_t i = 0; i < a.size(); ++i) {
+        CHECK(a[i].entry == b[i].entry);
+        CHECK(a[i].power == b[i].power);
+        CHECK(a[i].score == b[i].score);
+        CHECK(a[i].variables == b[i].variables);
+      }
+    }
+    CHECK(symbols(r(exps{1, 0, -1, 0, -1, 0, -1})) == std::vector<std::string>{"St"});
+    CHECK_THROWS_AS((void)r(exps{1, 2}), std::invalid_argument);
+  }
 }

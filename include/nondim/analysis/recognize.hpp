@@ -95,14 +95,19 @@ constexpr std::uint64_t mix64(std::uint64_t x) noexcept {
   return x;
 }
 
-/// A hash of a dimension (equal dimensions, equal hashes).
+/// A hash of a dimension (equal dimensions, equal hashes): a weighted sum of the exponents'
+/// numerators and denominators, mixed once.
 constexpr std::uint64_t dimension_hash(const dimension& d) noexcept {
-  std::uint64_t h = 0x9e3779b97f4a7c15ULL;
-  for (const auto& e : d.exponents) {
-    h = mix64(h ^ static_cast<std::uint64_t>(e.num));
-    h = mix64(h ^ static_cast<std::uint64_t>(e.den));
+  constexpr std::array<std::uint64_t, 2 * base_dimension_count> weight{
+      0x9e3779b97f4a7c15ULL, 0xc2b2ae3d27d4eb4fULL, 0x165667b19e3779f9ULL, 0xd6e8feb86659fd93ULL, 0xff51afd7ed558ccdULL,
+      0xc4ceb9fe1a85ec53ULL, 0x27d4eb2f165667c5ULL, 0x94d049bb133111ebULL, 0xbf58476d1ce4e5b9ULL, 0x9fb21c651e98df25ULL,
+      0x2127599bf4325c37ULL, 0x880355f21e6d1965ULL, 0x7fb5d329728ea185ULL, 0x81dadef4bc2dd44dULL};
+  std::uint64_t h = 0;
+  for (std::size_t i = 0; i < base_dimension_count; ++i) {
+    h += weight[2 * i] * static_cast<std::uint64_t>(d.exponents[i].num);
+    h += weight[2 * i + 1] * static_cast<std::uint64_t>(d.exponents[i].den - 1);
   }
-  return h;
+  return mix64(h);
 }
 
 /// Order-independent: the signature of a multiset of dimensions.
@@ -145,8 +150,32 @@ constexpr std::array<form_signature, catalog_form_total()> make_form_signatures(
   return out;
 }
 
-/// Every form's signature, computed at compile time.
+/// Every form's signature, computed at compile time, in catalog order.
 inline constexpr auto form_signatures = make_form_signatures();
+
+/// The same signatures grouped by number of factors (catalog order kept within a group),
+/// and where each group starts: a group of m variables is compared only with forms of m factors.
+constexpr std::array<form_signature, form_signatures.size()> make_signatures_by_size() {
+  std::array<form_signature, form_signatures.size()> out{};
+  std::size_t k = 0;
+  for (std::size_t m = 0; m <= catalog_max_factors; ++m)
+    for (const auto& s : form_signatures)
+      if (s.size == m) out[k++] = s;
+  return out;
+}
+inline constexpr auto signatures_by_size = make_signatures_by_size();
+
+constexpr std::array<std::size_t, catalog_max_factors + 2> make_size_offsets() {
+  std::array<std::size_t, catalog_max_factors + 2> out{};
+  for (std::size_t m = 0; m <= catalog_max_factors; ++m) {
+    std::size_t c = 0;
+    for (const auto& s : form_signatures)
+      if (s.size == m) ++c;
+    out[m + 1] = out[m] + c;
+  }
+  return out;
+}
+inline constexpr auto size_offsets = make_size_offsets();
 
 /// Hash of each kind's dimension.
 constexpr std::array<std::uint64_t, quantity_kind_count> make_kind_hashes() {
@@ -177,16 +206,49 @@ struct name_profile {
   std::uint64_t base = 0;   ///< kinds whose names include the part before the first '_'
 };
 
+/// The conventional names of each kind, split into words at compile time.
+inline constexpr std::size_t max_kind_names = 24;
+struct kind_words {
+  std::array<std::string_view, max_kind_names> word{};
+  std::size_t size = 0;
+};
+
+constexpr std::array<kind_words, quantity_kind_count> make_kind_words() {
+  std::array<kind_words, quantity_kind_count> out{};
+  for (std::size_t k = 0; k < quantity_kind_count; ++k) {
+    std::string_view list = quantity_kinds[k].names;
+    while (!list.empty()) {
+      const std::size_t end = list.find(' ');
+      if (end != 0) {
+        if (out[k].size == max_kind_names) throw std::length_error("nondim: too many names for one kind");
+        out[k].word[out[k].size++] = list.substr(0, end);
+      }
+      if (end == std::string_view::npos) break;
+      list.remove_prefix(end + 1);
+    }
+  }
+  return out;
+}
+inline constexpr auto kind_name_words = make_kind_words();
+
+inline bool kind_has_name(std::size_t kind, std::string_view name) noexcept {
+  const kind_words& w = kind_name_words[kind];
+  for (std::size_t i = 0; i < w.size; ++i)
+    if (w.word[i].size() == name.size() && w.word[i] == name) return true;
+  return false;
+}
+
 inline name_profile profile_of(const group_variable& v, std::uint64_t dim_hash) noexcept {
   name_profile p;
+  if (v.name.empty()) return p;
   const std::size_t underscore = v.name.find('_');
   const std::string_view base =
       underscore == std::string_view::npos || underscore == 0 ? std::string_view{} : v.name.substr(0, underscore);
   for (std::size_t i = 1; i < quantity_kind_count; ++i) {
     if (kind_hashes[i] != dim_hash || !(quantity_kinds[i].dim == v.dim)) continue;
     const auto bit = kind_bit(static_cast<quantity_kind>(i));
-    if (in_name_list(quantity_kinds[i].names, v.name)) p.exact |= bit;
-    if (!base.empty() && in_name_list(quantity_kinds[i].names, base)) p.base |= bit;
+    if (kind_has_name(i, v.name)) p.exact |= bit;
+    if (!base.empty() && kind_has_name(i, base)) p.base |= bit;
   }
   return p;
 }
@@ -218,6 +280,8 @@ inline int pair_score(const group_variable& v, const name_profile& p, quantity_k
 /// The state of matching one group against the catalog.
 struct recognizer {
   std::span<const group_variable> variables;
+  const std::uint64_t* known_hash = nullptr;             // precomputed per variable, or null
+  const name_profile* known_profile = nullptr;           // precomputed per variable, or null
   std::array<std::size_t, catalog_max_factors> index{};  // variables with a non-zero exponent
   std::array<rational, catalog_max_factors> exponent{};
   std::array<std::uint64_t, catalog_max_factors> hash{};
@@ -237,7 +301,8 @@ struct recognizer {
 
   void profile_all() noexcept {
     if (profiled) return;
-    for (std::size_t j = 0; j < size; ++j) profile[j] = profile_of(variables[index[j]], hash[j]);
+    for (std::size_t j = 0; j < size; ++j)
+      profile[j] = known_profile != nullptr ? known_profile[index[j]] : profile_of(variables[index[j]], hash[j]);
     profiled = true;
   }
 
@@ -251,7 +316,7 @@ struct recognizer {
   }
 
   void complete() {
-    catalog_match m{};
+    catalog_match m;
     m.entry = signature->entry;
     m.form = signature->form;
     m.power = power;
@@ -300,20 +365,24 @@ namespace detail {
 
 template <class Exponent>
 std::vector<catalog_match> recognize_impl(std::span<const group_variable> variables,
-                                          std::span<const Exponent> exponents) {
+                                          std::span<const Exponent> exponents,
+                                          const std::uint64_t* known_hash = nullptr,
+                                          const name_profile* known_profile = nullptr) {
   if (variables.size() != exponents.size())
     throw std::invalid_argument("nondim: recognize: " + std::to_string(variables.size()) + " variables but " +
                                 std::to_string(exponents.size()) + " exponents");
   std::vector<catalog_match> out;
   recognizer r;
   r.variables = variables;
+  r.known_hash = known_hash;
+  r.known_profile = known_profile;
   std::uint64_t signature = 0;
   for (std::size_t i = 0; i < exponents.size(); ++i) {
     if (exponents[i] == Exponent{0}) continue;
     if (r.size == catalog_max_factors) return out;  // more variables than any form has
     r.index[r.size] = i;
     r.exponent[r.size] = rational{exponents[i]};
-    r.hash[r.size] = dimension_hash(variables[i].dim);
+    r.hash[r.size] = known_hash != nullptr ? known_hash[i] : dimension_hash(variables[i].dim);
     signature = add_to_signature(signature, r.hash[r.size]);
     ++r.size;
   }
@@ -324,12 +393,13 @@ std::vector<catalog_match> recognize_impl(std::span<const group_variable> variab
     if (r.found) out.push_back(r.best);
     r.found = false;
   };
-  for (const auto& s : form_signatures) {
+  for (std::size_t k = size_offsets[r.size]; k < size_offsets[r.size + 1]; ++k) {
+    const form_signature& s = signatures_by_size[k];
     if (s.entry != current_entry) {
       flush();
       current_entry = s.entry;
     }
-    if (s.size != r.size || s.hash != signature) continue;
+    if (s.hash != signature) continue;
     r.profile_all();
     r.form = &catalog[s.entry].forms[s.form];
     r.signature = &s;
@@ -373,6 +443,37 @@ std::vector<catalog_match> recognize_impl(std::span<const group_variable> variab
                                                           std::span<const rational> exponents) {
   return detail::recognize_impl(variables, exponents);
 }
+
+/// \brief Recognition of many groups over the same variables (the groups of one analysis):
+/// the hashes of the variables' dimensions and what their names say are worked out once.
+///
+/// Keeps a view of `variables`: they must outlive the recogniser.
+class group_recognizer {
+ public:
+  explicit group_recognizer(std::span<const group_variable> variables)
+      : variables_(variables), hash_(variables.size()), profile_(variables.size()) {
+    for (std::size_t i = 0; i < variables.size(); ++i) {
+      hash_[i] = detail::dimension_hash(variables[i].dim);
+      profile_[i] = detail::profile_of(variables[i], hash_[i]);
+    }
+  }
+  /// \brief As `recognize(variables, exponents)`.
+  /// \throws std::invalid_argument when `exponents` is not one per variable.
+  [[nodiscard]] std::vector<catalog_match> operator()(std::span<const std::int64_t> exponents) const {
+    return detail::recognize_impl(variables_, exponents, hash_.data(), profile_.data());
+  }
+  /// \brief As `recognize(variables, exponents)` with rational exponents.
+  /// \throws std::invalid_argument when `exponents` is not one per variable.
+  [[nodiscard]] std::vector<catalog_match> operator()(std::span<const rational> exponents) const {
+    return detail::recognize_impl(variables_, exponents, hash_.data(), profile_.data());
+  }
+  [[nodiscard]] std::span<const group_variable> variables() const noexcept { return variables_; }
+
+ private:
+  std::span<const group_variable> variables_;
+  std::vector<std::uint64_t> hash_;
+  std::vector<detail::name_profile> profile_;
+};
 
 /// \brief The same, with the variables' names and dimensions given as separate spans
 /// (no kind hints). Allocates the list of variables.
