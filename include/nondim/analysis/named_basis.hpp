@@ -169,7 +169,7 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
     profile[i] = profile_of(variables[i], hash[i]);
   }
   std::vector<named_candidate> out;
-  std::vector<bool> used(n, false);
+  std::vector<char> used(n, 0);
   std::array<std::size_t, catalog_max_factors> chosen{};
   std::vector<rational> v(n);
 
@@ -203,11 +203,13 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
         return;
       }
       for (std::size_t var = 0; var < n; ++var) {
-        if (used[var] || hash[var] != sig.factor_hash[i] || !(variables[var].dim == form.factors[i].dim())) continue;
-        used[var] = true;
+        if (used[var] != 0 || hash[var] != sig.factor_hash[i] ||
+            !(variables[var].dim == kind_info(form.factors[i].kind).dim))
+          continue;
+        used[var] = 1;
         chosen[i] = var;
         self(self, i + 1);
-        used[var] = false;
+        used[var] = 0;
       }
     };
     search(search, 0);
