@@ -219,8 +219,11 @@ TEST_SUITE("named basis") {
     const auto b2 = run(v, {"k", "D", "rho", "mu"}, "h");
     CHECK(labels(b2) == std::vector<std::string>{"Nu", "Re", "Pr"});
     for (std::size_t k = 0; k < b.size(); ++k) CHECK(b[k].exponents == b2[k].exponents);
-    // Nu = h D / k exactly
+    // Nu = h D / k exactly, h on the first factor of the form h L / k_f
     CHECK(b[0].exponents == std::vector<std::int64_t>{1, -1, 0, 1, 0, 0, 0});
+    CHECK(b[0].variables[0] == 0);
+    CHECK(b[0].variables[1] == 3);
+    CHECK(b[0].variables[2] == 1);
   }
 
   TEST_CASE("natural convection gives Nusselt, Grashof and Prandtl numbers") {

@@ -60,6 +60,8 @@ struct named_group {
   /// was freed of the dependent variable and so differs from that group.
   std::size_t source = npos;
   bool reduced = false;
+  /// Catalog picks: the variable on each factor of the form, in the form's order.
+  std::array<std::size_t, catalog_max_factors> variables{};
 
   static constexpr std::size_t npos = static_cast<std::size_t>(-1);
   [[nodiscard]] bool named() const noexcept { return entry < catalog_size; }
@@ -240,6 +242,7 @@ std::vector<named_group> choose_named(std::span<const std::vector<std::int64_t>>
     g.entry = c.entry;
     g.form = c.form;
     g.power = c.power;
+    g.variables = c.variables;
     out.push_back(std::move(g));
     return true;
   };
