@@ -168,6 +168,13 @@ TEST_SUITE("catalog") {
          {{"P", dims::power, 1}, {"rho", dims::density, -1}, {"n", dims::frequency, -3}, {"D", dims::length, -5}}},
         // White, ch. 11 (from memory): specific speed n Q^(1/2) / (gH)^(3/4); to the 4th: n^4 Q^2 / (gH)^3
         {"N_s", 4, {{"n", dims::frequency, 4}, {"Q", dims::volume_flow_rate, 2}, {"gH", dims::specific_energy, -3}}},
+        // White, ch. 6, flow meters (from memory): Q = C_d A sqrt(2 dp / rho); squared: Q^2 rho / (dp d^4)
+        {"C_d",
+         2,
+         {{"Q", dims::volume_flow_rate, 2},
+          {"rho", dims::density, 1},
+          {"dp", dims::pressure, -1},
+          {"d", dims::length, -4}}},
         // White, table 5.2 (from memory): roughness ratio epsilon / L
         {"eps/D", 1, {{"eps", dims::length, 1}, {"D", dims::length, -1}}},
         // common practice, no source: Ca = mu U / sigma
@@ -435,9 +442,9 @@ TEST_SUITE("catalog") {
   TEST_CASE("the numbers the handbooks list are all in the catalog") {
     // ISO 80000-11:2019 and White / Incropera et al. / Bird, Stewart & Lightfoot (from memory)
     for (const char* s :
-         {"Re", "Eu", "Fr", "We", "Ma", "Kn", "Sr", "Gr",  "Ra",  "Pr",  "Nu",  "Bi",  "Fo",  "Pe",  "St", "Sc",
-          "Sh", "Le", "Ec", "Ri", "Bo", "Ca", "Oh", "Wo",  "Dn",  "Ar",  "Ga",  "Stk", "Gz",  "Ja",  "De", "Cy",
-          "Wi", "Ro", "Ek", "Ta", "Mg", "Da", "Ha", "C_D", "C_L", "C_p", "C_P", "C_Q", "C_H", "f_D", "c_f"}) {
+         {"Re", "Eu", "Fr", "We", "Ma", "Kn", "Sr", "Gr",  "Ra",  "Pr",  "Nu",  "Bi",  "Fo",  "Pe",  "St",  "Sc",
+          "Sh", "Le", "Ec", "Ri", "Bo", "Ca", "Oh", "Wo",  "Dn",  "Ar",  "Ga",  "Stk", "Gz",  "Ja",  "De",  "Cy",
+          "Wi", "Ro", "Ek", "Ta", "Mg", "Da", "Ha", "C_D", "C_L", "C_p", "C_P", "C_Q", "C_H", "C_d", "f_D", "c_f"}) {
       INFO(s);
       CHECK(find_catalog_entry(s) != nullptr);
     }

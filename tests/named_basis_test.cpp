@@ -384,6 +384,61 @@ TEST_SUITE("named basis") {
     CHECK(labels(run(v, {"U", "D", "rho"}, "f")) == std::vector<std::string>{"Sr", "Re"});
   }
 
+  TEST_CASE("a boundary layer keeps delta/x and names the Reynolds number on x") {
+    // White, Fluid Mechanics, ch. 7 (from memory): delta/x = 5.0/Re_x^(1/2) (Blasius)
+    const auto v = variables_of(
+        {{"delta", dims::length}, {"U", dims::velocity}, {"x", dims::length}, {"nu", dims::kinematic_viscosity}});
+    const auto b = run(v, {"x", "U"}, "delta");
+    REQUIRE(b.size() == 2);
+    CHECK_FALSE(b[0].named());
+    CHECK(b[0].exponents == std::vector<std::int64_t>{1, 0, -1, 0});
+    CHECK(label(b[1]) == "Re");
+    CHECK(b[1].exponents == std::vector<std::int64_t>{0, 1, 1, -1});
+  }
+
+  TEST_CASE("capillary rise: h/d, the Bond number and the contact angle") {
+    // White, Fluid Mechanics, ch. 1 (from memory): h = 4 sigma cos(theta)/(rho g d), so
+    // h/d = f(rho g d^2/sigma, theta); a ratio of two neutral lengths is not taken for Kn or eps/D
+    const auto v = variables_of({{"h", dims::length},
+                                 {"sigma", dims::surface_tension},
+                                 {"rho", dims::density},
+                                 {"g", dims::acceleration},
+                                 {"d", dims::length},
+                                 {"theta", dims::dimensionless}});
+    const auto b = run(v, {"d", "g", "sigma"}, "h");
+    REQUIRE(b.size() == 3);
+    CHECK_FALSE(b[0].named());
+    CHECK(b[0].exponents == std::vector<std::int64_t>{1, 0, 0, 0, -1, 0});
+    CHECK(has(b, "Bo"));
+    CHECK_FALSE(has(b, "Kn"));
+    CHECK_FALSE(has(b, "eps/D"));
+    const auto angle = std::find_if(b.begin(), b.end(), [](const named_group& g) {
+      return g.exponents == std::vector<std::int64_t>{0, 0, 0, 0, 0, 1};
+    });
+    CHECK(angle != b.end());
+  }
+
+  TEST_CASE("same-dimension numbers are named only when the names identify both quantities") {
+    // Kn = lambda/L (White, ch. 1, from memory): with the names lambda and L it is named
+    const auto v = variables_of({{"F", dims::force},
+                                 {"U", dims::velocity},
+                                 {"L", dims::length},
+                                 {"rho", dims::density},
+                                 {"mu", dims::dynamic_viscosity},
+                                 {"lambda", dims::length}});
+    CHECK(has(run(v, {"rho", "U", "L"}, "F"), "Kn"));
+    // with neutral names the same ratio stays classical
+    const auto w = variables_of({{"F", dims::force},
+                                 {"U", dims::velocity},
+                                 {"L", dims::length},
+                                 {"rho", dims::density},
+                                 {"mu", dims::dynamic_viscosity},
+                                 {"l2", dims::length}});
+    const auto b = run(w, {"rho", "U", "L"}, "F");
+    CHECK_FALSE(has(b, "Kn"));
+    CHECK_FALSE(has(b, "eps/D"));
+  }
+
   TEST_CASE("a dependent variable among the repeating ones ends up in one group only") {
     // the same forced-convection problem with h forced into the repeating set: every classical
     // group holds h; the named basis still confines it to one (Incropera et al., ch. 6, from memory)

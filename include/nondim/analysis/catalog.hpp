@@ -218,6 +218,16 @@ inline constexpr std::array table{
         {catalog_form{"C_P = P/(ρn³D⁵)", {{power, 1}, {density, -1}, {rotational_speed, -3}, {diameter, -5}}}},
         "White, Fluid Mechanics, ch. 11 (from memory); the power number of stirred vessels has the same "
         "form (common practice, from memory)"},
+    catalog_entry{
+        "discharge coefficient",
+        "C_d",
+        momentum_transfer,
+        1,
+        {catalog_form{"C_d = Q/(A√(2Δp/ρ))",
+                      {{volume_flow_rate, 1}, {reference_area, -1}, {pressure_difference, -half}, {density, half}}},
+         catalog_form{"C_d ∝ Q/(D²√(Δp/ρ)) (A = πD²/4)",
+                      {{volume_flow_rate, 1}, {diameter, -2}, {pressure_difference, -half}, {density, half}}}},
+        "White, Fluid Mechanics, ch. 6, flow meters (Q = C_d A_t √(2Δp/ρ), from memory)"},
     catalog_entry{"relative roughness",
                   "eps/D",
                   momentum_transfer,

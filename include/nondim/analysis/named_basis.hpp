@@ -10,14 +10,19 @@
 ///
 ///  1. Candidates: every mapping of the factors of every catalog form onto distinct problem
 ///     variables of equal dimensions whose product lies in the span of the given groups
-///     (always, when the given groups span the whole null space), and in which no variable
-///     contradicts its factor (see recognize.hpp for what contradicts). Each becomes a
-///     primitive integer exponent vector `entry^power`, power > 0.
-///  2. The dependent group: the first candidate containing the dependent variable, in
+///     (always, when the given groups span the whole null space), in which no variable
+///     contradicts its factor (see recognize.hpp for what contradicts), and in which every
+///     variable on a factor that shares its dimension with another factor of the form is
+///     identified by its name or hint (lambda/L is a Knudsen number, a ratio of two lengths
+///     with neutral names is not). Each becomes a primitive integer exponent vector
+///     `entry^power`, power > 0.
+///  2. The dependent group: when the given group of the dependent variable is its ratio to
+///     another variable of the same dimension (delta/x, theta/theta_i) and no candidate, that
+///     group, unchanged; otherwise the first candidate containing the dependent variable, in
 ///     the order below; if there is none, the first given group containing it, unchanged.
 ///  3. The others, without the dependent variable, taken greedily while the exact rank of
-///     the chosen set rises, in this order: tier-1 catalog numbers; given groups of two
-///     variables (simple ratios such as L/D); tier-2 catalog numbers; the other given
+///     the chosen set rises, in this order: tier-1 catalog numbers; given groups of at most
+///     two variables (simple ratios such as L/D); tier-2 catalog numbers; the other given
 ///     groups, fewest variables first. Candidates are ordered by catalog order, then by
 ///     the agreement of names and hints with the factors, then by the number of repeating
 ///     variables they use, then by input order. Each catalog entry is used at most once.
@@ -178,6 +183,12 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
   for (const auto& sig : form_signatures) {
     const catalog_form& form = catalog[sig.entry].forms[sig.form];
     std::size_t mappings = 0;
+    std::array<bool, catalog_max_factors> shares_dimension{};
+    for (std::size_t a = 0; a < form.size; ++a)
+      for (std::size_t b = 0; b < form.size; ++b)
+        if (a != b && sig.factor_hash[a] == sig.factor_hash[b] &&
+            kind_info(form.factors[a].kind).dim == kind_info(form.factors[b].kind).dim)
+          shares_dimension[a] = true;
     // depth-first over the factors; each factor takes an unused variable of its dimension
     auto search = [&](auto& self, std::size_t i) -> void {
       if (mappings >= named_mapping_limit) return;
@@ -187,13 +198,17 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
         int score = 0;
         std::size_t rep = 0;
         std::fill(v.begin(), v.end(), rational{});
+        bool unidentified = false;
         for (std::size_t f = 0; f < form.size; ++f) {
           const std::size_t var = chosen[f];
-          score += pair_score(variables[var], profile[var], form.factors[f].kind, conflict);
+          const int s = pair_score(variables[var], profile[var], form.factors[f].kind, conflict);
+          // where two factors share a dimension only names or hints tell them apart
+          if (s <= 0 && shares_dimension[f]) unidentified = true;
+          score += s;
           rep += is_repeating.empty() || !is_repeating[var] ? 0U : 1U;
           v[var] = form.factors[f].exponent;
         }
-        if (conflict) return;
+        if (conflict || unidentified) return;
         named_candidate c;
         c.entry = sig.entry;
         c.form = sig.form;
@@ -222,7 +237,7 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
 template <class T>
 std::vector<named_group> choose_named(std::span<const std::vector<std::int64_t>> classical,
                                       std::span<const named_candidate> candidates, std::size_t dependent,
-                                      std::size_t width) {
+                                      std::size_t width, const std::vector<bool>& same_dimension) {
   echelon<T> given(width);
   for (const auto& g : classical) given.add(g);
   const std::size_t target = given.rank();
@@ -250,11 +265,28 @@ std::vector<named_group> choose_named(std::span<const std::vector<std::int64_t>>
   // the dependent group
   bool have_dependent = false;
   if (dependent < width) {
-    for (const auto& c : candidates)
-      if (contains_dependent(c.exponents) && take_candidate(c)) {
-        have_dependent = true;
-        break;
-      }
+    // a plain ratio of the dependent variable to another of its dimension (delta/x,
+    // theta/theta_i) that is no catalog number is its natural normalisation: keep it
+    for (std::size_t k = 0; k < classical.size() && !have_dependent; ++k) {
+      const auto& g = classical[k];
+      if (!contains_dependent(g) || nonzero_count(g) != 2 || (g[dependent] != 1 && g[dependent] != -1)) continue;
+      std::size_t other = 0;
+      while (other == dependent || g[other] == 0) ++other;
+      if (g[other] != -g[dependent] || !same_dimension[other]) continue;
+      const bool is_catalog = std::any_of(candidates.begin(), candidates.end(), [&](const named_candidate& c) {
+        return c.exponents[dependent] != 0 && c.exponents[other] != 0 && nonzero_count(c.exponents) == 2;
+      });
+      if (is_catalog || !chosen.add(g)) continue;
+      named_group d;
+      d.exponents = g;
+      d.source = k;
+      out.push_back(std::move(d));
+      have_dependent = true;
+    }
+    for (const auto& c : candidates) {
+      if (have_dependent) break;
+      if (contains_dependent(c.exponents) && take_candidate(c)) have_dependent = true;
+    }
     if (!have_dependent)
       for (std::size_t k = 0; k < classical.size(); ++k)
         if (contains_dependent(classical[k]) && chosen.add(classical[k])) {
@@ -370,11 +402,15 @@ std::vector<named_group> choose_named(std::span<const std::vector<std::int64_t>>
                    });
 
   const std::size_t d = dependent == named_group::npos ? n : dependent;
+  // variables of the dependent variable's dimension
+  std::vector<bool> same_dimension(n, false);
+  if (d < n)
+    for (std::size_t i = 0; i < n; ++i) same_dimension[i] = i != d && variables[i].dim == variables[d].dim;
   std::vector<named_group> out;
   try {
-    out = detail::choose_named<rational>(classical, candidates, d, n);
+    out = detail::choose_named<rational>(classical, candidates, d, n, same_dimension);
   } catch (const rational_overflow&) {
-    out = detail::choose_named<boost::multiprecision::cpp_rational>(classical, candidates, d, n);
+    out = detail::choose_named<boost::multiprecision::cpp_rational>(classical, candidates, d, n, same_dimension);
   }
   return out;
 }
