@@ -2,6 +2,7 @@
 // mechanics and heat and mass transfer, checked against the groups the textbooks give, and
 // the basis properties (independent, exact, the same span, the dependent variable in one
 // group only).
+#include <nondim/analysis.hpp>
 #include <nondim/analysis/named_basis.hpp>
 #include <nondim/core/dims.hpp>
 
@@ -581,5 +582,231 @@ TEST_SUITE("named basis") {
       ++tested;
     }
     CHECK(tested >= 20);
+  }
+}
+
+namespace {
+
+// The first match of each group of an analysis, as "Re", "Fr^2"; "-" for none.
+std::vector<std::string> first_matches(const analysis& a) {
+  std::vector<std::string> out;
+  for (const auto& g : a.groups)
+    out.push_back(g.matches.empty() ? std::string("-") : power_text(g.matches.front().symbol, g.matches.front().power));
+  return out;
+}
+
+bool lists(const analysis& a, std::string_view symbol) {
+  return std::any_of(a.groups.begin(), a.groups.end(),
+                     [&](const pi_group& g) { return !g.matches.empty() && g.matches.front().symbol == symbol; });
+}
+
+// analyze() in the named basis, with the checks every named analysis passes: as many groups
+// as the classical one, exact (the SVD agrees), independent, the same span, the dependent
+// variable in the first group only.
+analysis analyze_named(const problem& p, std::string dependent = {}) {
+  options o;
+  o.form = basis::named;
+  o.dependent = dependent;
+  const analysis a = analyze(p, o);
+  options c = o;
+  c.form = basis::classical;
+  const analysis classical = analyze(p, c);
+  CHECK(a.form == basis::named);
+  CHECK(a.svd.agrees);
+  REQUIRE(a.groups.size() == classical.groups.size());
+  groups named_vectors;
+  groups classical_vectors;
+  for (const auto& g : a.groups) named_vectors.push_back(g.exponents);
+  for (const auto& g : classical.groups) classical_vectors.push_back(g.exponents);
+  CHECK(rank_of(named_vectors) == a.groups.size());
+  groups both = named_vectors;
+  both.insert(both.end(), classical_vectors.begin(), classical_vectors.end());
+  CHECK(rank_of(both) == a.groups.size());
+  const std::size_t d = *a.index_of(a.dependent);
+  if (!a.missing_variable) {
+    CHECK(a.groups.front().exponents[d] != 0);
+    for (std::size_t k = 1; k < a.groups.size(); ++k) CHECK(a.groups[k].exponents[d] == 0);
+  }
+  return a;
+}
+
+}  // namespace
+
+TEST_SUITE("named basis through analyze()") {
+  TEST_CASE("forced convection, given in units: Nu, Re, Pr; the classical groups are St, 1/Pe, 1/Re") {
+    // Incropera et al., ch. 6 (from memory): Nu_D = f(Re_D, Pr); with D, U, rho, cp repeating the
+    // hand calculation gives h/(rho U cp) = St, k/(rho cp U D) = 1/Pe, mu/(rho U D) = 1/Re
+    problem p;
+    p.add("h", "W/(m^2*K)")
+        .add("k", "W/(m*K)")
+        .add("U", "m/s")
+        .add("D", "m")
+        .add("rho", "kg/m^3")
+        .add("mu", "Pa*s")
+        .add("cp", "J/(kg*K)");
+    const analysis a = analyze_named(p);
+    CHECK(first_matches(a) == std::vector<std::string>{"Nu", "Re", "Pr"});
+    CHECK(a.groups[0].text(text_form::ascii) == "h*k^-1*D");
+    options o;
+    o.repeating = {"D", "U", "rho", "cp"};
+    const analysis c = analyze(p, o);
+    CHECK(c.form == basis::classical);
+    CHECK(first_matches(c) == std::vector<std::string>{"St", "Pe^-1", "Re^-1"});
+  }
+
+  TEST_CASE("natural convection: Nu, Gr and Pr") {
+    // Incropera et al., ch. 9 (from memory): Nu_L = f(Gr_L, Pr)
+    problem p;
+    p.add("h", dims::heat_transfer_coefficient)
+        .add("k", dims::thermal_conductivity)
+        .add("g", dims::acceleration)
+        .add("beta", dims::thermal_expansion_coefficient)
+        .add("dT", dims::temperature)
+        .add("L", dims::length)
+        .add("rho", dims::density)
+        .add("mu", dims::dynamic_viscosity)
+        .add("cp", dims::specific_heat_capacity);
+    const analysis a = analyze_named(p);
+    CHECK(first_matches(a).front() == "Nu");
+    CHECK(lists(a, "Gr"));
+    CHECK(lists(a, "Pr"));
+  }
+
+  TEST_CASE("a ship's resistance: force coefficient, Re, Fr^2") {
+    // White, Fluid Mechanics, ch. 5 (from memory): C_F = f(Re, Fr)
+    problem p;
+    p.add("F", "N").add("U", "m/s").add("L", "m").add("rho", "kg/m^3").add("mu", "Pa*s").add("g", "m/s^2");
+    CHECK(first_matches(analyze_named(p)) == std::vector<std::string>{"C_D", "Re", "Fr^2"});
+  }
+
+  TEST_CASE("a sphere's drag: C_D and Re") {
+    // White, Fluid Mechanics, ch. 5 and 7 (from memory): C_D = f(Re)
+    problem p;
+    p.add("F", "N").add("rho", "kg/m^3").add("U", "m/s").add("D", "m").add("mu", "Pa*s");
+    CHECK(first_matches(analyze_named(p)) == std::vector<std::string>{"C_D", "Re"});
+  }
+
+  TEST_CASE("pipe flow: a pressure group, Re, eps/D and L/D") {
+    // White, Fluid Mechanics, ch. 5-6 (from memory): dp/(rho V^2) = F(Re, eps/d, L/d)
+    problem p;
+    p.add("dp", "Pa")
+        .add("rho", "kg/m^3")
+        .add("U", "m/s")
+        .add("D", "m")
+        .add("mu", "Pa*s")
+        .add("L", "m")
+        .add("eps", "m");
+    const analysis a = analyze_named(p);
+    const auto m = first_matches(a);
+    CHECK((m[0] == "Eu" || m[0] == "f_D"));
+    CHECK(lists(a, "Re"));
+    CHECK(lists(a, "eps/D"));
+    const auto l_over_d = std::find_if(a.groups.begin(), a.groups.end(), [&](const pi_group& g) {
+      return g.exponent("L") == rational{1} && g.exponent("D") == rational{-1} && g.exponent("rho") == rational{0};
+    });
+    CHECK(l_over_d != a.groups.end());
+  }
+
+  TEST_CASE("a falling droplet: Re or We, Bo, Oh or Mo, and the density ratio") {
+    // common practice for drops and bubbles (from memory): Re (or We), Eotvos (Bond), Morton or Ohnesorge
+    problem p;
+    p.add("U", "m/s")
+        .add("D", "mm")
+        .add("rho_l", "kg/m^3")
+        .add("rho_g", "kg/m^3")
+        .add("mu", "Pa*s")
+        .add("sigma", "N/m")
+        .add("g", "m/s^2");
+    const analysis a = analyze_named(p);
+    const auto m = first_matches(a);
+    CHECK((m[0] == "Re" || m[0] == "We"));
+    CHECK(lists(a, "Bo"));
+    CHECK((lists(a, "Oh") || lists(a, "Mo")));
+  }
+
+  TEST_CASE("a heated plate transient: theta/theta_i, Bi, Fo, x/L") {
+    // Incropera et al., ch. 5 (from memory): theta/theta_i = f(x/L, Bi, Fo)
+    problem p;
+    p.add("theta", "K")
+        .add("theta_i", "K")
+        .add("h", "W/(m^2*K)")
+        .add("k_s", "W/(m*K)")
+        .add("L", "m")
+        .add("alpha", "m^2/s")
+        .add("t", "s")
+        .add("x", "m");
+    const analysis a = analyze_named(p);
+    CHECK(a.groups[0].matches.empty());
+    CHECK(a.groups[0].exponent("theta") == rational{1});
+    CHECK(a.groups[0].exponent("theta_i") == rational{-1});
+    CHECK(lists(a, "Bi"));
+    CHECK(lists(a, "Fo"));
+    CHECK_FALSE(lists(a, "Nu"));
+  }
+
+  TEST_CASE("a pump: head, flow and power coefficients and Re") {
+    // White, Fluid Mechanics, ch. 11 (from memory): C_H, C_P = f(C_Q, rho n D^2/mu)
+    problem p;
+    p.add("gH", "J/kg")
+        .add("Q", "m^3/s")
+        .add("n", "1/s")
+        .add("D", "m")
+        .add("rho", "kg/m^3")
+        .add("mu", "Pa*s")
+        .add("P", "W");
+    const analysis a = analyze_named(p);
+    CHECK(first_matches(a).front() == "C_H");
+    CHECK(lists(a, "C_Q"));
+    CHECK(lists(a, "C_P"));
+    CHECK(lists(a, "Re"));
+  }
+
+  TEST_CASE("mass transfer: Sh, Re, Sc") {
+    // Incropera et al., ch. 6 (from memory): Sh_D = f(Re_D, Sc)
+    problem p;
+    p.add("h_m", "m/s").add("U", "m/s").add("D", "m").add("rho", "kg/m^3").add("mu", "Pa*s").add("D_AB", "m^2/s");
+    CHECK(first_matches(analyze_named(p)) == std::vector<std::string>{"Sh", "Re", "Sc"});
+  }
+
+  TEST_CASE("a boundary layer: delta/x and Re_x") {
+    // White, Fluid Mechanics, ch. 7 (from memory): delta/x = 5.0/Re_x^(1/2)
+    problem p;
+    p.add("delta", "mm").add("U", "m/s").add("x", "m").add("nu", "m^2/s");
+    const analysis a = analyze_named(p);
+    REQUIRE(a.groups.size() == 2);
+    CHECK(a.groups[0].exponent("delta") == rational{1});
+    CHECK(a.groups[0].exponent("x") == rational{-1});
+    CHECK(a.groups[0].exponent("U") == rational{0});
+    // delta/x is listed as a Knudsen number and a relative roughness whose names contradict them
+    for (const auto& m : a.groups[0].matches) CHECK(m.ambiguous);
+    CHECK(first_matches(a)[1] == "Re");
+    CHECK(a.groups[1].exponent("x") == rational{1});
+  }
+
+  TEST_CASE("capillary rise: h/d, Bo and the contact angle") {
+    // White, Fluid Mechanics, ch. 1 (from memory): h = 4 sigma cos(theta)/(rho g d)
+    problem p;
+    p.add("h", "mm").add("sigma", "N/m").add("rho", "kg/m^3").add("g", "m/s^2").add("d", "mm").add("theta", "1");
+    const analysis a = analyze_named(p);
+    CHECK(a.groups[0].exponent("h") == rational{1});
+    CHECK(a.groups[0].exponent("d") == rational{-1});
+    CHECK(lists(a, "Bo"));
+  }
+
+  TEST_CASE("the catalog entry a named group was chosen as is its first match") {
+    // Nu and Bi share a form (Incropera et al., ch. 5-6, from memory): the group is still
+    // marked ambiguous, and the entry chosen comes first
+    problem p;
+    p.add("h", dims::heat_transfer_coefficient)
+        .add("k", dims::thermal_conductivity)
+        .add("U", dims::velocity)
+        .add("D", dims::length)
+        .add("rho", dims::density)
+        .add("mu", dims::dynamic_viscosity)
+        .add("cp", dims::specific_heat_capacity);
+    const analysis a = analyze_named(p);
+    REQUIRE(a.groups[0].matches.size() == 2);
+    CHECK(a.groups[0].matches[0] == group_match{"Nusselt number", "Nu", 1, true});
+    CHECK(a.groups[0].matches[1].symbol == "Bi");
   }
 }
