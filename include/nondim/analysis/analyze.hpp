@@ -17,6 +17,7 @@
 #include "detail/cat.hpp"
 #include "detail/core.hpp"
 #include "error.hpp"
+#include "naming.hpp"
 #include "options.hpp"
 #include "pi_group.hpp"
 #include "problem.hpp"
@@ -160,7 +161,7 @@ inline analysis classical_analysis(const problem& p, const options& o) {
   a.multiprecision = x.multiprecision;
   a.form = basis::classical;
   for (std::size_t r : x.repeating) a.repeating.push_back(names[r]);
-  for (std::size_t k = 0; k < x.groups.size(); ++k) a.groups.push_back(pi_group{x.groups[k], names, x.heads[k]});
+  for (std::size_t k = 0; k < x.groups.size(); ++k) a.groups.push_back(pi_group{x.groups[k], names, x.heads[k], {}});
 
   std::vector<bool> repeating(n, false);
   for (std::size_t r : x.repeating) repeating[r] = true;
@@ -202,8 +203,11 @@ inline analysis classical_analysis(const problem& p, const options& o) {
 /// last, and then it is isolated and `missing_variable` is set). Each group is in the
 /// classical form: one non-repeating variable with a positive exponent times powers of the
 /// repeating ones, primitive integer exponents; groups are ordered by the input position of
-/// their non-repeating variable. A numerical disagreement of the SVD check is reported in
-/// `svd`, never thrown.
+/// their non-repeating variable. With `o.form == basis::named` the groups are then
+/// re-expressed in catalog numbers where the null space allows (naming.hpp,
+/// named_basis.hpp). In either basis every group lists the catalog entries it matches in
+/// `pi_group::matches`. A numerical disagreement of the SVD check is reported in `svd`,
+/// never thrown.
 ///
 /// \throws analysis_error when the problem is empty; the dependent or a repeating variable
 ///         is not in the problem; a repeating variable is given twice or is dimensionless;
@@ -213,11 +217,9 @@ inline analysis classical_analysis(const problem& p, const options& o) {
 ///         for and the elimination overflows.
 inline analysis analyze(const problem& p, const options& o = {}) {
   analysis a = detail::classical_analysis(p, o);
-  if (o.form == basis::named) {
-    // Extension point: the catalog of named groups re-expresses `a.groups` here and sets
-    // `a.form = basis::named`. Until it exists the classical groups are given.
-    a.notes.push_back("the named basis is not available yet; the groups are in the classical basis");
-  }
+  std::vector<std::size_t> chosen;  // catalog entry of each group in the named basis
+  if (o.form == basis::named) chosen = detail::rename_in_catalog_groups(a);
+  detail::attach_matches(a, chosen);
   a.svd = check_with_svd(a.matrix, a.groups, a.rank);
   if (!a.svd.agrees)
     a.notes.push_back(detail::cat({"the SVD in double finds rank ", std::to_string(a.svd.rank), ", the exact rank is ",

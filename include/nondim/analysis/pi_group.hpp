@@ -14,6 +14,7 @@
 #include "../core/rational.hpp"
 #include "detail/cat.hpp"
 #include "error.hpp"
+#include "recognize.hpp"
 #include "symbols.hpp"
 
 namespace nondim {
@@ -52,7 +53,10 @@ inline double apply_factor(double r, double x, std::int64_t e) noexcept {
 struct pi_group {
   std::vector<std::int64_t> exponents;  ///< aligned with the problem's variables
   std::vector<std::string> variables;   ///< the problem's variable names, aligned with `exponents`
-  std::size_t non_repeating = 0;        ///< index of the group's non-repeating variable
+  std::size_t non_repeating = 0;        ///< index of the group's non-repeating variable (written first)
+  /// Catalog entries the group matches, best first (see recognize.hpp); filled by analyze()
+  /// in both bases.
+  std::vector<group_match> matches;
 
   /// \brief The exponent of `variable`; 0 where absent (not in the group, or not in the problem).
   [[nodiscard]] rational exponent(std::string_view variable) const {
