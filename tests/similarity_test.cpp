@@ -381,6 +381,36 @@ TEST_SUITE("similarity") {
     CHECK(group(plan, "Re").matched);
   }
 
+  TEST_CASE("an underdetermined plan still reports a group that cannot match") {
+    // The model speed is fixed below the Mach-matched one (V_m = V_p c_m/c_p, same air):
+    // Ma cannot match whatever the density and size of the model.
+    auto p = tunnel_problem();
+    p.variables[1].model.reset();
+    p.variables[2].model = 100.0;
+    p.variables[3].model.reset();
+    const auto plan = plan_similarity(p);
+    CHECK(plan.status == similarity_status::underdetermined);
+    CHECK(plan.unmatched == std::vector<std::string>{"Ma"});
+    CHECK(close(*group(plan, "Ma").ratio, 100.0 / 150.0));
+    CHECK(group(plan, "Re").matched);
+    bool noted = false;
+    for (const auto& n : plan.notes) noted = noted || n.find("Ma cannot match") != std::string::npos;
+    CHECK(noted);
+  }
+
+  TEST_CASE("a model value beyond the range of double is reported, not thrown") {
+    // x = y^1000 with y 10 times the prototype's: x would be 10^1000 times larger.
+    similarity_problem p;
+    p.add(var("F", "", 1.0, std::nullopt)).add(var("x", "", 1.0, 1.0)).add(var("y", "", 1.0, 1.0, 10.0));
+    p.add_group({1, 1, 0}).add_group({0, 1, -1000});
+    const auto plan = plan_similarity(p);
+    CHECK(plan.status == similarity_status::exact);
+    CHECK(std::isinf(*plan.model("x")));
+    bool noted = false;
+    for (const auto& n : plan.notes) noted = noted || n.find("beyond the range of double") != std::string::npos;
+    CHECK(noted);
+  }
+
   TEST_CASE("variables that appear only beside the dependent variable must be fixed") {
     // With no viscosity, drag on a body has the one group F/(rho V^2 L^2): nothing to match,
     // every model value is free (White sec. 5.3 style reasoning, common practice).

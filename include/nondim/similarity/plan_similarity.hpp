@@ -367,6 +367,14 @@ inline similarity_plan plan_similarity(const similarity_problem& p) {
     plan.notes.push_back(
         "the priority groups cannot all match together: they are matched as nearly as possible (least squares in the "
         "logarithms), the other groups within what remains");
+  if (plan.status == similarity_status::underdetermined && !plan.unmatched.empty())
+    plan.notes.push_back(detail::join(plan.unmatched) +
+                         (plan.unmatched.size() == 1 ? " cannot match" : " cannot all match") +
+                         " with the model values given, whatever the free ones are");
+  for (const auto& v : plan.variables)
+    if (v.source == model_source::found && !(std::isfinite(*v.model) && *v.model > 0.0))
+      plan.notes.push_back("the model value found for " + detail::quote(v.name) +
+                           " is beyond the range of double: the plan asks for an impossible model");
   if (plan.status == similarity_status::underdetermined)
     plan.notes.push_back("fix the model " + std::string(plan.free.size() == 1 ? "value of " : "values of ") +
                          detail::join(plan.free) +
