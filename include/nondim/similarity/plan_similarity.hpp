@@ -326,8 +326,11 @@ inline similarity_plan plan_similarity(const similarity_problem& p) {
     if (!dp.prototype_over_model)
       why.push_back("it depends on model values still to be fixed (" + detail::join(missing) + ")");
     if (!all_matched)
-      why.push_back("approximate: " + detail::join(plan.unmatched) + (plan.unmatched.size() > 1 ? " do" : " does") +
-                    " not match, so the similarity is partial and the scale-up leaves out what they govern");
+      why.push_back("approximate: " + detail::join(plan.unmatched) +
+                    (plan.unmatched.size() > 1 ? " do not match, so the similarity is partial and the scale-up leaves "
+                                                 "out what they govern"
+                                               : " does not match, so the similarity is partial and the scale-up "
+                                                 "leaves out what it governs"));
     if (holding.size() > 1) {
       std::vector<std::string> texts;
       for (auto h : holding) texts.push_back(detail::group_name(plan.groups[h]));

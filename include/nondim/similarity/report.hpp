@@ -104,7 +104,7 @@ inline std::string to_text(const similarity_plan& plan) {
     if (dv.model && dv.prototype)
       s += "  predicted prototype " + dp.name + " = " + detail::format_number(*dv.prototype) +
            (dv.unit.empty() ? "" : " " + dv.unit) + " from the measured model value " +
-           detail::format_number(*dv.model) + "\n";
+           detail::format_number(*dv.model) + (dv.unit.empty() ? "" : " " + dv.unit) + "\n";
   } else {
     s += "  none\n";
   }
