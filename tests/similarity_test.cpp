@@ -3,6 +3,7 @@
 // Reynolds number rho V L / mu, Froude number V/sqrt(g L) as V^2/(g L), Mach number V/c,
 // the turbomachine flow, head and power coefficients), and every expected value comes from
 // the textbook scaling formula it states, evaluated here independently of the solver.
+#include <nondim/analysis/pi_groups.hpp>
 #include <nondim/quantity.hpp>
 #include <nondim/similarity.hpp>
 
@@ -227,6 +228,29 @@ TEST_SUITE("similarity") {
     CHECK(close(*plan.model("V"), 7.5 * std::exp(s)));
     CHECK(close(std::log(*group(plan, "Fr").ratio), 2.0 * s - a, 1e-10));
     CHECK(close(std::log(*group(plan, "Re").ratio), s - c, 1e-10));
+  }
+
+  TEST_CASE("groups from the compile-time classical basis give the same Froude plan") {
+    // pi_exponents chooses L, V, rho as repeating variables and gives R/(rho V^2 L^2),
+    // mu/(rho V L) = 1/Re and g L/V^2 = 1/Fr^2: another basis of the same groups, so the
+    // plan must not change (Froude scaling, White sec. 5.5, from memory).
+    constexpr auto e = pi_exponents<dims::force, dims::density, dims::velocity, dims::length, dims::dynamic_viscosity,
+                                    dims::acceleration>();
+    static_assert(e.size() == 3);
+    auto p = ship_problem();
+    p.groups.clear();
+    std::size_t froude = e.size();
+    for (std::size_t k = 0; k < e.size(); ++k) {
+      p.add_group(std::vector<std::int64_t>(e[k].begin(), e[k].end()));
+      if (e[k][5] != 0) froude = k;
+    }
+    REQUIRE(froude < e.size());
+    p.priority = {froude};
+    const auto plan = plan_similarity(p);
+    CHECK(plan.status == similarity_status::partial);
+    CHECK(close(*plan.model("V"), 7.5 * std::sqrt(4.5 / 135.0)));
+    CHECK(close(*plan.dependent.prototype_over_model, (rho_sea_15C / rho_fresh_15C) * std::pow(30.0, 3), 1e-10));
+    CHECK(plan.unmatched.size() == 1);
   }
 
   TEST_CASE("the priority list decides which group matches") {
