@@ -734,6 +734,24 @@ TEST_SUITE("similarity errors") {
     CHECK_THROWS_AS(plan_similarity(p), similarity_error);
   }
 
+  TEST_CASE("variables and groups are found by name and label") {
+    auto p = ship_problem();
+    p.variable("V").model = 1.0;
+    CHECK(p.variables[2].model == std::optional<double>{1.0});
+    CHECK(p.group_index("Re") == 2);
+    p.priority = {p.group_index("Fr")};
+    CHECK(p.priority == std::vector<std::size_t>{1});
+    try {
+      (void)p.variable("nu");
+      FAIL("unknown variable accepted");
+    } catch (const similarity_error& e) {
+      CHECK(e.variable() == "nu");
+    }
+    CHECK_THROWS_WITH_AS((void)p.group_index("We"), doctest::Contains("no group is labelled 'We'"), similarity_error);
+    p.groups[0].label = "Re";
+    CHECK_THROWS_WITH_AS((void)p.group_index("Re"), doctest::Contains("more than one"), similarity_error);
+  }
+
   TEST_CASE("similarity_error is an invalid_argument") {
     static_assert(std::is_base_of_v<std::invalid_argument, similarity_error>);
     CHECK_THROWS_AS(plan_similarity(similarity_problem{}), std::invalid_argument);

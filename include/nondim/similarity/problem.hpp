@@ -9,10 +9,12 @@
 #include <cstdint>
 #include <optional>
 #include <string>
+#include <string_view>
 #include <utility>
 #include <vector>
 
 #include "../core/dimension.hpp"
+#include "error.hpp"
 
 namespace nondim {
 
@@ -61,6 +63,27 @@ struct similarity_problem {
   similarity_problem& add_group(std::vector<std::int64_t> exponents, std::string label = {}) {
     groups.push_back(similarity_group{std::move(exponents), std::move(label)});
     return *this;
+  }
+
+  /// \brief The variable called `name`, to set its values.
+  /// \throws similarity_error naming `name` when there is no such variable.
+  similarity_variable& variable(std::string_view name) {
+    for (auto& v : variables)
+      if (v.name == name) return v;
+    throw similarity_error("nondim: there is no variable '" + std::string(name) + "' in the similarity problem",
+                           std::string(name));
+  }
+  /// \brief The 0-based index of the group labelled `label` (for `priority`).
+  /// \throws similarity_error when no group, or more than one, has that label.
+  [[nodiscard]] std::size_t group_index(std::string_view label) const {
+    std::optional<std::size_t> found;
+    for (std::size_t k = 0; k < groups.size(); ++k) {
+      if (groups[k].label != label) continue;
+      if (found) throw similarity_error("nondim: more than one group is labelled '" + std::string(label) + "'", {}, k);
+      found = k;
+    }
+    if (!found) throw similarity_error("nondim: no group is labelled '" + std::string(label) + "'");
+    return *found;
   }
 };
 
