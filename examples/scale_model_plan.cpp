@@ -18,11 +18,11 @@ int main() {
   p.dependent = "F";
   // values in each variable's own unit
   p.add({.name = "F", .unit = "N", .model = 41.0})  // drag measured on the model
-      .add({.name = "rho", .unit = "kg/m3", .prototype = 1025.0, .model = 999.0})
+      .add({.name = "rho", .unit = "kg/m^3", .prototype = 1025.0, .model = 999.0})
       .add({.name = "V", .unit = "knot", .factor = units::knot.factor, .prototype = 3.2})  // to be found
       .add({.name = "D", .unit = "m", .prototype = 6.0, .model = 0.5})
       .add({.name = "mu", .unit = "cP", .factor = units::cP.factor, .prototype = 1.2, .model = 1.1})
-      .add({.name = "g", .unit = "m/s2", .prototype = 9.81, .model = 9.81});
+      .add({.name = "g", .unit = "m/s^2", .prototype = 9.81, .model = 9.81});
   p.add_group({1, -1, -2, -2, 0, 0}, "C_D").add_group({0, 0, 2, -1, 0, -1}, "Fr").add_group({0, 1, 1, 1, -1, 0}, "Re");
   p.priority = {1};  // the Froude number must match exactly
 

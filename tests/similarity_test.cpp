@@ -56,7 +56,7 @@ similarity_problem drag_problem() {
   similarity_problem p;
   p.dependent = "F";
   p.add(var("F", "N", 1.0, std::nullopt))
-      .add(var("rho", "kg/m3", 1.0, rho_air_20C, rho_water_20C))
+      .add(var("rho", "kg/m^3", 1.0, rho_air_20C, rho_water_20C))
       .add(var("V", "m/s", 1.0, 20.0))
       .add(var("L", "ft", units::ft.factor, 4.0, 1.0))
       .add(var("mu", "cP", units::cP.factor, mu_air_20C / 1e-3, mu_water_20C / 1e-3));
@@ -70,11 +70,11 @@ similarity_problem ship_problem() {
   similarity_problem p;
   p.dependent = "R";
   p.add(var("R", "N", 1.0, std::nullopt))
-      .add(var("rho", "kg/m3", 1.0, rho_sea_15C, rho_fresh_15C))
+      .add(var("rho", "kg/m^3", 1.0, rho_sea_15C, rho_fresh_15C))
       .add(var("V", "m/s", 1.0, 7.5))
       .add(var("L", "m", 1.0, 135.0, 4.5))  // 1:30 model
-      .add(var("mu", "Pa s", 1.0, mu_sea_15C, mu_fresh_15C))
-      .add(var("g", "m/s2", 1.0, g_n, g_n));
+      .add(var("mu", "Pa*s", 1.0, mu_sea_15C, mu_fresh_15C))
+      .add(var("g", "m/s^2", 1.0, g_n, g_n));
   p.add_group({1, -1, -2, -2, 0, 0}, "C_R").add_group({0, 0, 2, -1, 0, -1}, "Fr").add_group({0, 1, 1, 1, -1, 0}, "Re");
   return p;
 }
@@ -85,10 +85,10 @@ similarity_problem tunnel_problem() {
   similarity_problem p;
   p.dependent = "F";
   p.add(var("F", "N", 1.0, std::nullopt))
-      .add(var("rho", "kg/m3", 1.0, rho_isa_0, rho_isa_0))
+      .add(var("rho", "kg/m^3", 1.0, rho_isa_0, rho_isa_0))
       .add(var("V", "m/s", 1.0, 150.0))
       .add(var("L", "m", 1.0, 2.4, 0.3))  // 1:8 model
-      .add(var("mu", "Pa s", 1.0, mu_isa_0, mu_isa_0))
+      .add(var("mu", "Pa*s", 1.0, mu_isa_0, mu_isa_0))
       .add(var("c", "m/s", 1.0, a_isa_0, a_isa_0));
   p.add_group({1, -1, -2, -2, 0, 0}, "C_F").add_group({0, 1, 1, 1, -1, 0}, "Re").add_group({0, 0, 1, 0, 0, -1}, "Ma");
   return p;
@@ -320,11 +320,11 @@ TEST_SUITE("similarity") {
     similarity_problem p;
     p.dependent = "P";
     p.add(var("P", "kW", 1e3, std::nullopt, 9.0))
-        .add(var("Q", "m3/h", 1.0 / 3600.0, 540.0))
+        .add(var("Q", "m^3/h", 1.0 / 3600.0, 540.0))
         .add(var("gH", "J/kg", 1.0, 32.0 * g_n))  // 32 m of head
         .add(var("N", "rpm", units::rpm.factor, 1450.0, 2900.0))
         .add(var("D", "mm", 1e-3, 400.0, 250.0))
-        .add(var("rho", "kg/m3", 1.0, rho_water_20C, rho_water_20C));
+        .add(var("rho", "kg/m^3", 1.0, rho_water_20C, rho_water_20C));
     p.add_group({1, 0, 0, -3, -5, -1}, "C_P")
         .add_group({0, 1, 0, -1, -3, 0}, "C_Q")
         .add_group({0, 0, 1, -2, -2, 0}, "C_H");
@@ -345,17 +345,52 @@ TEST_SUITE("similarity") {
     CHECK(close(*group(plan, "C_Q").prototype, (540.0 / 3600.0) / (omega * std::pow(0.4, 3))));
   }
 
+  TEST_CASE("variables made from unit text carry factors and dimensions from the parser") {
+    // The pump of the previous case, every unit read from text: the factors are those of
+    // the unit table (NIST SP 811 B.8 for rpm: 1/60 r/s, one revolution 2 pi rad; SI
+    // Brochure 9th ed. for h, kW and mm), and the dimensions let the groups be checked.
+    similarity_problem p;
+    p.dependent = "P";
+    p.add(make_similarity_variable("P", "kW", std::nullopt, 9.0))
+        .add(make_similarity_variable("Q", "m^3/h", 540.0))
+        .add(make_similarity_variable("gH", "J/kg", 32.0 * g_n))
+        .add(make_similarity_variable("N", "rpm", 1450.0, 2900.0))
+        .add(make_similarity_variable("D", "mm", 400.0, 250.0))
+        .add(make_similarity_variable("rho", "kg/m^3", rho_water_20C, rho_water_20C));
+    CHECK(p.variables[1].factor == doctest::Approx(1.0 / 3600.0).epsilon(1e-15));
+    CHECK(p.variables[1].dim == dims::volume / dims::time);
+    p.add_group({1, 0, 0, -3, -5, -1}, "C_P")
+        .add_group({0, 1, 0, -1, -3, 0}, "C_Q")
+        .add_group({0, 0, 1, -2, -2, 0}, "C_H");
+    const auto plan = plan_similarity(p);
+    CHECK(plan.status == similarity_status::exact);
+    CHECK(close(*plan.model("Q"), 540.0 * 2.0 * std::pow(250.0 / 400.0, 3)));
+    const double omega = 1450.0 * 2.0 * 3.14159265358979323846 / 60.0;
+    CHECK(close(*group(plan, "C_Q").prototype, (540.0 / 3600.0) / (omega * std::pow(0.4, 3))));
+    // a head coefficient written with the wrong power of D is caught
+    p.groups[2].exponents = {0, 0, 1, -2, -1, 0};
+    CHECK_THROWS_WITH_AS(plan_similarity(p), doctest::Contains("is not dimensionless"), similarity_error);
+    // a bad unit text is the parser's error, with its column
+    CHECK_THROWS_AS(make_similarity_variable("x", "kg/m/s", 1.0), unit_error);
+    // a thermometer reading is accepted as a variable but refused for scaling
+    similarity_problem t;
+    t.add(make_similarity_variable("q", "W/m^2")).add(make_similarity_variable("T", "degC", 80.0, 40.0));
+    t.add_group({1, 0});
+    CHECK(t.variables[1].offset == 273.15);  // SI Brochure 9th ed., 2.3.1: t/degC = T/K - 273.15
+    CHECK_THROWS_WITH_AS(plan_similarity(t), doctest::Contains("'T' is in an affine unit"), similarity_error);
+  }
+
   TEST_CASE("fan laws: the same fan at a lower speed in warmer air") {
     // Fan laws (ASHRAE Handbook, HVAC Systems and Equipment, Fans chapter, from memory):
     // Q ~ N D^3, dp ~ rho N^2 D^2, P ~ rho N^3 D^5.
     similarity_problem p;
     p.dependent = "P";
     p.add(var("P", "W", 1.0, std::nullopt))
-        .add(var("Q", "m3/s", 1.0, 2.5))
+        .add(var("Q", "m^3/s", 1.0, 2.5))
         .add(var("dp", "Pa", 1.0, 600.0))
         .add(var("N", "rpm", units::rpm.factor, 1800.0, 1440.0))
         .add(var("D", "m", 1.0, 0.63, 0.63))
-        .add(var("rho", "kg/m3", 1.0, 1.20, 0.95));
+        .add(var("rho", "kg/m^3", 1.0, 1.20, 0.95));
     p.add_group({1, 0, 0, -3, -5, -1}).add_group({0, 1, 0, -1, -3, 0}).add_group({0, 0, 1, -2, -2, -1});
     const auto plan = plan_similarity(p);
     CHECK(plan.status == similarity_status::exact);
@@ -440,7 +475,7 @@ TEST_SUITE("similarity") {
     // every model value is free (White sec. 5.3 style reasoning, common practice).
     similarity_problem p;
     p.add(var("F", "N", 1.0, std::nullopt))
-        .add(var("rho", "kg/m3", 1.0, 1.2))
+        .add(var("rho", "kg/m^3", 1.0, 1.2))
         .add(var("V", "m/s", 1.0, 10.0))
         .add(var("L", "m", 1.0, 2.0));
     p.add_group({1, -1, -2, -2});
@@ -474,7 +509,7 @@ TEST_SUITE("similarity") {
     similarity_problem p;
     p.dependent = "T";
     p.add(var("F", "N", 1.0, 3.0))
-        .add(var("rho", "kg/m3", 1.0, 1.2, 1.2))
+        .add(var("rho", "kg/m^3", 1.0, 1.2, 1.2))
         .add(var("V", "m/s", 1.0, 10.0))
         .add(var("L", "m", 1.0, 2.0, 0.5))
         .add(var("T", "K", 1.0, std::nullopt));
@@ -503,10 +538,10 @@ TEST_SUITE("similarity") {
     // (White sec. 5.3, alternative forms of the drag groups, from memory).
     similarity_problem p;
     p.add(var("F", "N", 1.0, std::nullopt))
-        .add(var("rho", "kg/m3", 1.0, rho_air_20C, rho_water_20C))
+        .add(var("rho", "kg/m^3", 1.0, rho_air_20C, rho_water_20C))
         .add(var("V", "m/s", 1.0, 20.0))
         .add(var("L", "m", 1.0, 1.2, 0.3))
-        .add(var("mu", "Pa s", 1.0, mu_air_20C, mu_water_20C));
+        .add(var("mu", "Pa*s", 1.0, mu_air_20C, mu_water_20C));
     p.add_group({1, -1, -2, -2, 0}).add_group({1, 0, -1, -1, -1});
     // V at the Reynolds-matched speed (White sec. 5.5): both groups give the same factor
     const double vm = 20.0 * (rho_air_20C / rho_water_20C) * (mu_water_20C / mu_air_20C) * 4.0;
@@ -659,7 +694,7 @@ TEST_SUITE("similarity errors") {
     const auto* degc = find_unit_entry("degC");
     REQUIRE(degc != nullptr);
     similarity_problem p;
-    p.add(var("q", "W/m2", 1.0, std::nullopt)).add(var("T", "degC", degc->factor, 80.0, 40.0));
+    p.add(var("q", "W/m^2", 1.0, std::nullopt)).add(var("T", "degC", degc->factor, 80.0, 40.0));
     p.variables[1].offset = degc->offset;  // 273.15 K (SI Brochure 9th ed., 2.3.1)
     p.add_group({1, 0});
     check_names(p, "T", "affine unit");

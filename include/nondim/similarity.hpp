@@ -4,6 +4,7 @@
 /// `plan_similarity()`, `similarity_plan`, `to_text(similarity_plan)`.
 
 #include "similarity/error.hpp"
+#include "similarity/from_unit.hpp"
 #include "similarity/plan.hpp"
 #include "similarity/plan_similarity.hpp"
 #include "similarity/problem.hpp"
