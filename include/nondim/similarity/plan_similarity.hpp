@@ -13,6 +13,7 @@
 #include <vector>
 
 #include "../core/rational.hpp"
+#include "detail/cat.hpp"
 #include "detail/exact.hpp"
 #include "detail/text.hpp"
 #include "detail/validate.hpp"
@@ -291,9 +292,10 @@ inline similarity_plan plan_similarity(const similarity_problem& p) {
   dp.rule_exponents.assign(n, rational{0});
   std::vector<std::string> missing;
   if (holding.empty()) {
-    dp.remark = "the dependent variable " + detail::quote(dp.name) +
-                " appears in no group: similarity gives no rule to carry it to full scale (the problem may lack a "
-                "variable)";
+    dp.remark =
+        detail::cat("the dependent variable ", detail::quote(dp.name),
+                    " appears in no group: similarity gives no rule to carry it to full scale (the problem may lack a "
+                    "variable)");
   } else {
     const std::size_t h0 = holding.front();
     dp.rule_group = h0;
@@ -324,21 +326,23 @@ inline similarity_plan plan_similarity(const similarity_problem& p) {
 
     std::vector<std::string> why;
     if (!dp.prototype_over_model)
-      why.push_back("it depends on model values still to be fixed (" + detail::join(missing) + ")");
+      why.push_back(detail::cat("it depends on model values still to be fixed (", detail::join(missing), ")"));
     if (!all_matched)
-      why.push_back("approximate: " + detail::join(plan.unmatched) +
-                    (plan.unmatched.size() > 1 ? " do not match, so the similarity is partial and the scale-up leaves "
-                                                 "out what they govern"
-                                               : " does not match, so the similarity is partial and the scale-up "
-                                                 "leaves out what it governs"));
+      why.push_back(detail::cat(
+          "approximate: ", detail::join(plan.unmatched),
+          (plan.unmatched.size() > 1 ? " do not match, so the similarity is partial and the scale-up leaves "
+                                       "out what they govern"
+                                     : " does not match, so the similarity is partial and the scale-up "
+                                       "leaves out what it governs")));
     if (holding.size() > 1) {
       std::vector<std::string> texts;
       for (auto h : holding) texts.push_back(detail::group_name(plan.groups[h]));
-      why.push_back(std::string(agree ? "it appears in " : "approximate: it appears in ") +
-                    std::to_string(holding.size()) + " groups (" + detail::join(texts) + "); the rule uses the first" +
-                    (agree ? ", and the others give the same factor"
-                           : ", and the others give different factors or none (write the groups so that only one "
-                             "holds the dependent variable)"));
+      why.push_back(
+          detail::cat(std::string(agree ? "it appears in " : "approximate: it appears in "),
+                      std::to_string(holding.size()), " groups (", detail::join(texts), "); the rule uses the first",
+                      (agree ? ", and the others give the same factor"
+                             : ", and the others give different factors or none (write the groups so that only one "
+                               "holds the dependent variable)")));
     }
     for (std::size_t i = 0; i < why.size(); ++i) {
       if (i > 0) dp.remark += "; ";
@@ -357,35 +361,36 @@ inline similarity_plan plan_similarity(const similarity_problem& p) {
 
   // Notes for people.
   const auto count = [](std::size_t c, const char* one, const char* many) {
-    return std::to_string(c) + " " + (c == 1 ? one : many);
+    return detail::cat(std::to_string(c), " ", c == 1 ? one : many);
   };
   if (plan.status == similarity_status::partial)
-    plan.notes.push_back(count(independent.size(), "group", "groups") + " to match with " +
-                         count(f, "model value", "model values") + " to find: " + detail::join(plan.unmatched) +
-                         (plan.unmatched.size() == 1 ? " cannot match" : " cannot all match") +
-                         (p.priority.empty() ? "; the model values are a least-squares compromise in the logarithms"
-                                             : "; the priority groups come first, the rest are matched as nearly as "
-                                               "possible (least squares in the logarithms)"));
+    plan.notes.push_back(
+        detail::cat(count(independent.size(), "group", "groups"), " to match with ",
+                    count(f, "model value", "model values"), " to find: ", detail::join(plan.unmatched),
+                    (plan.unmatched.size() == 1 ? " cannot match" : " cannot all match"),
+                    (p.priority.empty() ? "; the model values are a least-squares compromise in the logarithms"
+                                        : "; the priority groups come first, the rest are matched as nearly as "
+                                          "possible (least squares in the logarithms)")));
   if (!plan.priority_matched)
     plan.notes.push_back(
         "the priority groups cannot all match together: they are matched as nearly as possible (least squares in the "
         "logarithms), the other groups within what remains");
   if (plan.status == similarity_status::underdetermined && !plan.unmatched.empty())
-    plan.notes.push_back(detail::join(plan.unmatched) +
-                         (plan.unmatched.size() == 1 ? " cannot match" : " cannot all match") +
-                         " with the model values given, whatever the free ones are");
+    plan.notes.push_back(detail::cat(detail::join(plan.unmatched),
+                                     (plan.unmatched.size() == 1 ? " cannot match" : " cannot all match"),
+                                     " with the model values given, whatever the free ones are"));
   for (const auto& v : plan.variables)
     if (v.source == model_source::found && !(std::isfinite(*v.model) && *v.model > 0.0))
-      plan.notes.push_back("the model value found for " + detail::quote(v.name) +
-                           " is beyond the range of double: the plan asks for an impossible model");
+      plan.notes.push_back(detail::cat("the model value found for ", detail::quote(v.name),
+                                       " is beyond the range of double: the plan asks for an impossible model"));
   if (plan.status == similarity_status::underdetermined)
-    plan.notes.push_back("fix the model " + std::string(plan.free.size() == 1 ? "value of " : "values of ") +
-                         detail::join(plan.free) +
-                         " (or another set of as many that determines the rest) to complete the plan");
+    plan.notes.push_back(detail::cat("fix the model ", std::string(plan.free.size() == 1 ? "value of " : "values of "),
+                                     detail::join(plan.free),
+                                     " (or another set of as many that determines the rest) to complete the plan"));
   for (std::size_t j = 0; j < n; ++j)
     if (plan.variables[j].source == model_source::unused)
-      plan.notes.push_back(detail::quote(names[j]) +
-                           " appears in no group: similarity does not constrain its model value");
+      plan.notes.push_back(
+          detail::cat(detail::quote(names[j]), " appears in no group: similarity does not constrain its model value"));
   return plan;
 }
 

@@ -14,6 +14,7 @@
 #include <vector>
 
 #include "../core/dimension.hpp"
+#include "detail/cat.hpp"
 #include "error.hpp"
 
 namespace nondim {
@@ -70,8 +71,9 @@ struct similarity_problem {
   similarity_variable& variable(std::string_view name) {
     for (auto& v : variables)
       if (v.name == name) return v;
-    throw similarity_error("nondim: there is no variable '" + std::string(name) + "' in the similarity problem",
-                           std::string(name));
+    throw similarity_error(
+        detail::cat("nondim: there is no variable '", std::string(name), "' in the similarity problem"),
+        std::string(name));
   }
   /// \brief The 0-based index of the group labelled `label` (for `priority`).
   /// \throws similarity_error when no group, or more than one, has that label.
@@ -79,10 +81,12 @@ struct similarity_problem {
     std::optional<std::size_t> found;
     for (std::size_t k = 0; k < groups.size(); ++k) {
       if (groups[k].label != label) continue;
-      if (found) throw similarity_error("nondim: more than one group is labelled '" + std::string(label) + "'", {}, k);
+      if (found)
+        throw similarity_error(detail::cat("nondim: more than one group is labelled '", std::string(label), "'"), {},
+                               k);
       found = k;
     }
-    if (!found) throw similarity_error("nondim: no group is labelled '" + std::string(label) + "'");
+    if (!found) throw similarity_error(detail::cat("nondim: no group is labelled '", std::string(label), "'"));
     return *found;
   }
 };

@@ -9,6 +9,7 @@
 #include <string>
 #include <vector>
 
+#include "detail/cat.hpp"
 #include "detail/text.hpp"
 #include "plan.hpp"
 
@@ -52,7 +53,8 @@ inline std::string status_line(const similarity_plan& plan) {
         if (i > 0) s += ", ";
         s += plan.free[i];
       }
-      return s + ")";
+      s += ")";
+      return s;
     }
   }
   return "unknown";
@@ -65,7 +67,7 @@ inline std::string status_line(const similarity_plan& plan) {
 /// table of groups (prototype, model, model/prototype, matched), the scale-up rule for the
 /// dependent variable, notes, and the cautions of similarity testing.
 inline std::string to_text(const similarity_plan& plan) {
-  std::string s = "Similarity plan: " + detail::status_line(plan) + "\n\n";
+  std::string s = detail::cat("Similarity plan: ", detail::status_line(plan), "\n\n");
 
   s += "Variables (values in each variable's unit)\n";
   std::vector<std::vector<std::string>> rows{
@@ -79,15 +81,13 @@ inline std::string to_text(const similarity_plan& plan) {
   s += detail::table(rows);
 
   s += "\nGroups (dimensionless)\n";
-  rows = {{"#", "group", "prototype", "model", "model/prototype", "matched"}};
+  rows.clear();
+  rows.push_back({"#", "group", "prototype", "model", "model/prototype", "matched"});
   for (std::size_t k = 0; k < plan.groups.size(); ++k) {
     const auto& g = plan.groups[k];
-    std::string name = g.label.empty() ? g.text : g.label + " = " + g.text;
-    std::string matched;
-    if (g.holds_dependent)
-      matched = "holds " + plan.dependent.name + " (scale-up)";
-    else
-      matched = g.matched ? "yes" : "NO";
+    std::string name = g.label.empty() ? g.text : detail::cat(g.label, " = ", g.text);
+    std::string matched = g.holds_dependent ? detail::cat("holds ", plan.dependent.name, " (scale-up)")
+                                            : std::string(g.matched ? "yes" : "NO");
     if (g.priority) matched += " (priority)";
     rows.push_back({std::to_string(k + 1), name, detail::cell(g.prototype), detail::cell(g.model),
                     detail::cell(g.ratio), matched});
@@ -95,24 +95,25 @@ inline std::string to_text(const similarity_plan& plan) {
   s += detail::table(rows);
 
   const auto& dp = plan.dependent;
-  s += "\nScale-up of " + dp.name + "\n";
+  s += detail::cat("\nScale-up of ", dp.name, "\n");
   if (dp.rule_group) {
-    s += "  from group " + std::to_string(*dp.rule_group + 1) + ": " + dp.rule;
-    if (dp.prototype_over_model) s += " = " + detail::format_number(*dp.prototype_over_model);
+    s += detail::cat("  from group ", std::to_string(*dp.rule_group + 1), ": ", dp.rule);
+    if (dp.prototype_over_model) s += detail::cat(" = ", detail::format_number(*dp.prototype_over_model));
     s += dp.exact ? " (exact)\n" : " (approximate)\n";
     const auto& dv = plan.variables[dp.index];
-    if (dv.model && dv.prototype)
-      s += "  predicted prototype " + dp.name + " = " + detail::format_number(*dv.prototype) +
-           (dv.unit.empty() ? "" : " " + dv.unit) + " from the measured model value " +
-           detail::format_number(*dv.model) + (dv.unit.empty() ? "" : " " + dv.unit) + "\n";
+    if (dv.model && dv.prototype) {
+      const std::string unit = dv.unit.empty() ? std::string{} : detail::cat(" ", dv.unit);
+      s += detail::cat("  predicted prototype ", dp.name, " = ", detail::format_number(*dv.prototype), unit,
+                       " from the measured model value ", detail::format_number(*dv.model), unit, "\n");
+    }
   } else {
     s += "  none\n";
   }
-  if (!dp.remark.empty()) s += "  " + dp.remark + "\n";
+  if (!dp.remark.empty()) s += detail::cat("  ", dp.remark, "\n");
 
   if (!plan.notes.empty()) {
     s += "\nNotes\n";
-    for (const auto& n : plan.notes) s += "  - " + n + "\n";
+    for (const auto& n : plan.notes) s += detail::cat("  - ", n, "\n");
   }
 
   s += "\nCautions\n";
@@ -120,11 +121,11 @@ inline std::string to_text(const similarity_plan& plan) {
        "    free-surface and compressibility effects, and the instrumentation of a small model can make model\n"
        "    and prototype differ even when every group listed matches.\n";
   if (!plan.unmatched.empty())
-    s += "  - Partial similarity: " + detail::join(plan.unmatched) +
-         (plan.unmatched.size() == 1 ? " differs" : " differ") +
-         " between model and prototype. The effects they govern must be\n"
-         "    corrected for separately (for a towed ship model, a skin-friction correction is common practice)\n"
-         "    or bounded by tests at more than one scale; the scale-up above does not include them.\n";
+    s += detail::cat(
+        "  - Partial similarity: ", detail::join(plan.unmatched), plan.unmatched.size() == 1 ? " differs" : " differ",
+        " between model and prototype. The effects they govern must be\n"
+        "    corrected for separately (for a towed ship model, a skin-friction correction is common practice)\n"
+        "    or bounded by tests at more than one scale; the scale-up above does not include them.\n");
   s += "  - Results that set loads or safety margins are reviewed under the applicable local codes and licensed\n"
        "    engineering practice.\n";
   return s;

@@ -53,7 +53,7 @@ inline std::string group_text(const std::vector<std::string>& names, const std::
     append_power(side, names[j], rational{e > 0 ? e : -e});
     if (e < 0) ++below;
   }
-  if (top.empty()) top = "1";
+  if (top.empty()) top.push_back('1');  // not `= "1"`: a false GCC 12 -Wrestrict at -O3
   if (bottom.empty()) return top;
   std::string s = top;
   s.push_back('/');
