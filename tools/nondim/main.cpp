@@ -32,7 +32,7 @@ int run(int argc, char** argv) {
   commands.push_back(add_convert(app));
   commands.push_back(add_dim(app));
   // TMP commands.push_back(add_scale(app));
-  // TMP commands.push_back(add_demo(app));
+  commands.push_back(add_demo(app));
 
   // An unknown first word would otherwise reach CLI11 as an unexpected positional.
   if (argc >= 2) {
