@@ -4,3 +4,4 @@
 /// include the cheaper <nondim/quantity.hpp>.
 
 #include "quantity.hpp"
+#include "analysis/compile_time.hpp"

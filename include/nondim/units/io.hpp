@@ -2,7 +2,7 @@
 /// \file io.hpp
 /// \brief Stream output of quantities: the SI value and its coherent SI unit ("1.8e-05 kg·m⁻¹·s⁻¹").
 
-#include <iosfwd>
+#include <ostream>
 
 #include "../core/format.hpp"
 #include "quantity_type.hpp"

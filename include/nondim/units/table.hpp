@@ -101,6 +101,8 @@ inline constexpr std::array unit_table{
     detail::si("Pa", "pascal", dims::pressure, detail::brochure_t4),
     detail::si("J", "joule", dims::energy, detail::brochure_t4),
     detail::si("W", "watt", dims::power, detail::brochure_t4),
+    // watt hour (kWh, MWh): NIST SP 811 (2008) B.9, "kilowatt hour: 3.6 E+06 J"
+    unit_entry{"Wh", "watt hour", 3600.0, dims::energy, true, detail::no_decade, 0.0, detail::nist_b9},
     detail::si("C", "coulomb", dims::electric_charge, detail::brochure_t4),
     detail::si("V", "volt", dims::voltage, detail::brochure_t4),
     detail::si("F", "farad", dims::capacitance, detail::brochure_t4),
@@ -213,36 +215,104 @@ struct resolved_symbol {
   double factor;               ///< entry factor times the prefix, exact for decade units
 };
 
+namespace detail {
+
+/// One key of the symbol index: a table symbol or an alias, and the entry it names.
+struct symbol_key {
+  std::string_view key;
+  std::size_t entry;
+};
+
+constexpr std::size_t table_position(std::string_view symbol) {
+  for (std::size_t i = 0; i < unit_table.size(); ++i)
+    if (unit_table[i].symbol == symbol) return i;
+  throw "nondim: an alias names a symbol missing from the unit table";  // a compile error
+}
+
+/// Every symbol and alias, sorted, so a lookup is a binary search (a few comparisons of
+/// short strings) instead of a scan. Built once at compile time; a duplicate key is a
+/// compile error, so "symbols are unique" is checked, not assumed.
+constexpr std::array<symbol_key, unit_table.size() + unit_aliases.size()> make_symbol_index() {
+  std::array<symbol_key, unit_table.size() + unit_aliases.size()> index{};
+  for (std::size_t i = 0; i < unit_table.size(); ++i) index[i] = symbol_key{unit_table[i].symbol, i};
+  for (std::size_t i = 0; i < unit_aliases.size(); ++i)
+    index[unit_table.size() + i] = symbol_key{unit_aliases[i].alias, table_position(unit_aliases[i].symbol)};
+  for (std::size_t i = 1; i < index.size(); ++i) {  // insertion sort: ~100 keys, compile time only
+    const symbol_key k = index[i];
+    std::size_t j = i;
+    for (; j > 0 && k.key < index[j - 1].key; --j) index[j] = index[j - 1];
+    index[j] = k;
+  }
+  for (std::size_t i = 1; i < index.size(); ++i)
+    if (index[i].key == index[i - 1].key) throw "nondim: a unit symbol or alias appears twice in the unit table";
+  return index;
+}
+
+inline constexpr auto symbol_index = make_symbol_index();
+
+/// For each first byte, the range of `symbol_index` whose keys start with it (the index is
+/// sorted, so they are contiguous): a lookup compares a handful of keys at most.
+struct symbol_bucket {
+  std::uint16_t begin;
+  std::uint16_t end;
+};
+constexpr std::array<symbol_bucket, 256> make_symbol_buckets() {
+  std::array<symbol_bucket, 256> buckets{};
+  for (std::size_t i = symbol_index.size(); i-- > 0;) {
+    const auto b = static_cast<unsigned char>(symbol_index[i].key[0]);
+    if (buckets[b].end == 0) buckets[b].end = static_cast<std::uint16_t>(i + 1);
+    buckets[b].begin = static_cast<std::uint16_t>(i);
+  }
+  return buckets;
+}
+inline constexpr auto symbol_buckets = make_symbol_buckets();
+
+}  // namespace detail
+
+/// \brief Position in `unit_table` of the entry with exactly this symbol (after aliases), or
+/// `unit_table.size()` when there is none.
+///
+/// Compile-time callers use positions, not pointers: GCC 12 with -fsanitize=undefined
+/// cannot compare the address of a table element with null in a constant expression.
+constexpr std::size_t find_unit_position(std::string_view symbol) noexcept {
+  if (symbol.empty()) return unit_table.size();
+  const detail::symbol_bucket b = detail::symbol_buckets[static_cast<unsigned char>(symbol[0])];
+  for (std::size_t i = b.begin; i < b.end; ++i) {
+    const std::string_view k = detail::symbol_index[i].key;
+    if (k.size() == symbol.size() && k == symbol) return detail::symbol_index[i].entry;
+  }
+  return unit_table.size();
+}
+
 /// \brief The table entry with exactly this symbol (after aliases), or null.
 constexpr const unit_entry* find_unit_entry(std::string_view symbol) noexcept {
-  for (const auto& a : unit_aliases)
-    if (a.alias == symbol) {
-      symbol = a.symbol;
-      break;
-    }
-  for (const auto& e : unit_table)
-    if (e.symbol == symbol) return &e;
-  return nullptr;
+  const std::size_t i = find_unit_position(symbol);
+  return i < unit_table.size() ? &unit_table[i] : nullptr;
 }
 
 /// \brief Resolve a symbol by the rules at the top of this file; empty when unknown.
 constexpr std::optional<resolved_symbol> resolve_unit_symbol(std::string_view symbol) noexcept {
-  if (const unit_entry* e = find_unit_entry(symbol)) return resolved_symbol{e, nullptr, e->factor};
-  const prefix_entry* best = nullptr;
-  const unit_entry* best_unit = nullptr;
-  for (const auto& p : prefix_table) {
-    if (symbol.size() <= p.symbol.size() || symbol.substr(0, p.symbol.size()) != p.symbol) continue;
-    const unit_entry* u = find_unit_entry(symbol.substr(p.symbol.size()));
-    if (u == nullptr || !u->prefixable) continue;
-    if (best == nullptr || p.symbol.size() > best->symbol.size()) {
-      best = &p;
+  if (const std::size_t e = find_unit_position(symbol); e < unit_table.size())
+    return resolved_symbol{&unit_table[e], nullptr, unit_table[e].factor};
+  std::size_t best = prefix_table.size();
+  std::size_t best_unit = unit_table.size();
+  for (std::size_t i = 0; i < prefix_table.size(); ++i) {
+    const prefix_entry& p = prefix_table[i];
+    if (symbol.size() <= p.symbol.size() || symbol[0] != p.symbol[0] || symbol.substr(0, p.symbol.size()) != p.symbol)
+      continue;
+    const std::size_t u = find_unit_position(symbol.substr(p.symbol.size()));
+    if (u == unit_table.size() || !unit_table[u].prefixable) continue;
+    if (best == prefix_table.size() || p.symbol.size() > prefix_table[best].symbol.size()) {
+      best = i;
       best_unit = u;
     }
   }
-  if (best == nullptr) return std::nullopt;
-  const double f = best_unit->decade != detail::no_decade ? detail::pow10(best_unit->decade + best->exponent)
-                                                          : best_unit->factor * detail::pow10(best->exponent);
-  return resolved_symbol{best_unit, best, f};
+  if (best == prefix_table.size()) return std::nullopt;
+  const unit_entry& unit = unit_table[best_unit];
+  const prefix_entry& prefix = prefix_table[best];
+  const double f = unit.decade != detail::no_decade ? detail::pow10(unit.decade + prefix.exponent)
+                                                    : unit.factor * detail::pow10(prefix.exponent);
+  return resolved_symbol{&unit, &prefix, f};
 }
 
 }  // namespace nondim

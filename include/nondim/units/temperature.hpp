@@ -16,9 +16,10 @@ namespace nondim {
 
 namespace detail {
 constexpr const unit_entry& table_entry(std::string_view symbol) {
-  const unit_entry* e = find_unit_entry(symbol);
-  if (e == nullptr) throw "nondim: unit symbol missing from the table";  // a compile error in constant evaluation
-  return *e;
+  const std::size_t i = find_unit_position(symbol);
+  if (i == unit_table.size())
+    throw "nondim: unit symbol missing from the table";  // a compile error in constant evaluation
+  return unit_table[i];
 }
 inline constexpr double celsius_offset = table_entry("degC").offset;
 inline constexpr double fahrenheit_offset = table_entry("degF").offset;

@@ -1,5 +1,6 @@
 // An outside project using nondim's public contract (DESIGN.md), built against nondim
 // either installed (find_package) or as a subdirectory.
+#include <nondim/parse.hpp>
 #include <nondim/quantity.hpp>
 
 #include <cstdio>
@@ -17,5 +18,22 @@ int main() {
   static_assert(decltype(sqrt(q / rho))::dim == dims::velocity);
   const double psi = q / units::psi;
   std::printf("Re = %.0f, dynamic pressure = %.5f psi, %s\n", Re, psi, to_string(dims::pressure).c_str());
-  return (psi > 0.0087 && psi < 0.0088) ? 0 : 1;
+  // unit expressions at run time (nondim/parse.hpp)
+  const parsed_unit h = parse_unit("Btu/(h*ft^2*degF)");  // NIST SP 811 B.8: 5.678 263 W/(m^2 K)
+  const auto p = parse_quantity<dims::pressure>("14.7 psi");
+  const double f = convert(100.0, "degC", "degF");  // NIST SP 811 B.9: 212 degF
+  bool refused = false;
+  try {
+    (void)parse_unit("kg/m/s");
+  } catch (const unit_error& e) {
+    refused = e.column() == 5;
+  }
+  try {
+    (void)parse_quantity<dims::length>("3 s");
+    refused = false;
+  } catch (const dimension_error&) {
+  }
+  const bool parsed = h.dim == dims::heat_transfer_coefficient && h.factor > 5.678 && h.factor < 5.679 &&
+                      p.si() > 101352.0 && p.si() < 101354.0 && f > 211.999 && f < 212.001 && refused;
+  return (psi > 0.0087 && psi < 0.0088 && parsed) ? 0 : 1;
 }

@@ -1,0 +1,43 @@
+#pragma once
+// What every fuzz target checks beyond "no crash": a parsed unit has a usable factor and
+// prints to forms that read back to the same dimension (and, for linear units, the same
+// factor bit for bit); an error has a column inside the text.
+#include <nondim/parse.hpp>
+
+#include <cfloat>
+#include <cmath>
+#include <cstddef>
+#include <string_view>
+
+namespace nondim_fuzz {
+
+inline void require(bool ok) {
+  if (!ok) __builtin_trap();
+}
+
+inline std::size_t code_points(std::string_view s) {
+  std::size_t n = 0;
+  for (const char c : s) n += (static_cast<unsigned char>(c) & 0xC0U) != 0x80U ? 1U : 0U;
+  return n;
+}
+
+inline void check_error(const nondim::unit_error& e, std::string_view text) {
+  require(e.column() >= 1);
+  require(e.column() <= code_points(text) + 1);
+  require(e.what()[0] != '\0');
+}
+
+inline void check_unit(const nondim::parsed_unit& u) {
+  require(std::isfinite(u.factor) && u.factor >= DBL_MIN);
+  require(std::isfinite(u.offset));
+  for (const nondim::text_form form : {nondim::text_form::unicode, nondim::text_form::ascii}) {
+    const auto si = nondim::parse_unit(nondim::si_unit_string(u, form));
+    require(si.dim == u.dim && si.factor == 1.0 && si.offset == 0.0);
+    if (u.offset == 0.0) {
+      const auto q = nondim::parse_quantity(nondim::to_string(u, form));
+      require(q.dim == u.dim && q.value == u.factor);
+    }
+  }
+}
+
+}  // namespace nondim_fuzz
