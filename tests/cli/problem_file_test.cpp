@@ -57,8 +57,9 @@ TEST_SUITE("problem file") {
     CHECK(message_of("titel = \"x\"\n[[variable]]\nname = \"F\"\nunit = \"N\"\n") ==
           "nondim: p.toml:1: unknown key 'titel' (a problem file takes title, dependent, repeating and [[variable]] "
           "tables)");
-    CHECK(message_of("[[variable]]\nname = \"F\"\nunits = \"N\"\n").find("p.toml:3: unknown key 'units' in variable 1") !=
-          std::string::npos);
+    CHECK(
+        message_of("[[variable]]\nname = \"F\"\nunits = \"N\"\n").find("p.toml:3: unknown key 'units' in variable 1") !=
+        std::string::npos);
   }
 
   TEST_CASE("values of the wrong type are named with their line") {

@@ -33,7 +33,8 @@ struct demo_variable {
 // Transfer, 6th ed., table A.4 (rho 1.1614 kg/m^3, mu 184.6e-7 N*s/m^2, k 26.3e-3 W/(m*K),
 // cp 1.007 kJ/(kg*K)). Cell diameter of a 21700 cylindrical cell (21 mm): common practice.
 constexpr std::array<demo_variable, 7> pack{{
-    {"h", "W/(m^2*K)", std::numeric_limits<double>::quiet_NaN(), "heat transfer coefficient on the cell surface (sought)"},
+    {"h", "W/(m^2*K)", std::numeric_limits<double>::quiet_NaN(),
+     "heat transfer coefficient on the cell surface (sought)"},
     {"U", "m/s", 2.5, "air speed approaching the cells"},
     {"D", "mm", 21.0, "cell diameter (21700 cells)"},
     {"rho", "kg/m^3", 1.1614, "air density at 300 K"},
@@ -60,10 +61,9 @@ void run_demo(std::ostream& out) {
   const analysis a = analyze(p, o);
 
   // The demo's words below name the groups; check that the analysis gave those groups.
-  const std::vector<std::vector<std::int64_t>> expected{
-      {1, 0, 1, 0, 0, -1, 0},   // h D / k         Nusselt
-      {0, 1, 1, 1, -1, 0, 0},   // rho U D / mu    Reynolds
-      {0, 0, 0, 0, 1, -1, 1}};  // mu cp / k       Prandtl
+  const std::vector<std::vector<std::int64_t>> expected{{1, 0, 1, 0, 0, -1, 0},   // h D / k         Nusselt
+                                                        {0, 1, 1, 1, -1, 0, 0},   // rho U D / mu    Reynolds
+                                                        {0, 0, 0, 0, 1, -1, 1}};  // mu cp / k       Prandtl
   if (a.groups.size() != expected.size()) throw std::logic_error("demo: unexpected number of groups");
   for (std::size_t k = 0; k < expected.size(); ++k)
     if (a.groups[k].exponents != expected[k]) throw std::logic_error("demo: unexpected group " + a.groups[k].text());
@@ -83,9 +83,8 @@ void run_demo(std::ostream& out) {
          "A fan blows air at 300 K across a row of 21700 cylindrical cells. The thermal model of the\n"
          "pack needs the heat transfer coefficient h on the cell surface, and the fan must be sized.\n"
          "Seven variables are involved:\n\n"
-      << detail::aligned_table(rows, {detail::align::left, detail::align::right, detail::align::left,
-                                      detail::align::left},
-                               2)
+      << detail::aligned_table(rows,
+                               {detail::align::left, detail::align::right, detail::align::left, detail::align::left}, 2)
       << "\n$ nondim groups h='W/(m^2*K)' U=m/s D=mm rho=kg/m^3 mu=Pa*s k='W/(m*K)' cp='J/(kg*K)' "
          "--repeating D,k,mu,rho\n\n"
       << text_report(a)

@@ -25,12 +25,23 @@ inline std::string names_suffix(const pi_group& g, text_form form) {
   return s;
 }
 
-/// "SVD check: rank 3, agrees; singular values 3.87, 1.59, 0.71; max residual 0".
+/// "SVD check: rank 3, agrees with the exact rank; singular values 3.74, 2.8, 0.369 (2 more
+/// below the tolerance 1.7e-15); max residual 0". Values below the tolerance are rounding
+/// noise and are only counted.
 inline std::string svd_line(const svd_check& c) {
   std::string s = "SVD check: rank " + std::to_string(c.rank) + (c.agrees ? ", agrees" : ", DISAGREES") +
                   " with the exact rank; singular values";
-  if (c.singular_values.empty()) s += " none";
-  for (std::size_t k = 0; k < c.singular_values.size(); ++k) s += (k ? ", " : " ") + six_digits(c.singular_values[k]);
+  std::size_t shown = 0;
+  std::size_t below = 0;
+  for (const double v : c.singular_values) {
+    if (v > c.tolerance) {
+      s += (shown++ ? ", " : " ") + six_digits(v);
+    } else {
+      ++below;
+    }
+  }
+  if (shown == 0) s += " none above the tolerance";
+  if (below != 0) s += " (" + std::to_string(below) + " more below the tolerance " + six_digits(c.tolerance) + ")";
   return s + "; max residual " + six_digits(c.max_residual);
 }
 
