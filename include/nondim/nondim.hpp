@@ -4,4 +4,5 @@
 /// include the cheaper <nondim/quantity.hpp>.
 
 #include "quantity.hpp"
+#include "parse.hpp"
 #include "analysis/compile_time.hpp"

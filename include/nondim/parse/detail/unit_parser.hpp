@@ -114,7 +114,10 @@ inline std::string describe_text(std::string_view text) {
   if (text.size() > 80) return "the unit expression";
   for (const char c : text)
     if (static_cast<unsigned char>(c) < 0x20U || c == 0x7F) return "the unit expression";
-  return "`" + std::string(text) + "`";
+  std::string quoted(1, '`');  // appended, not operator+: GCC 12 -Wrestrict false positive
+  quoted.append(text);
+  quoted.push_back('`');
+  return quoted;
 }
 
 inline std::string trimmed(std::string_view t) {
@@ -575,10 +578,22 @@ class unit_parser {
     }
     const std::string numerator = trimmed(span(group_begin, slash));
     std::string denominator;
-    for (const auto& p : parts) denominator += (denominator.empty() ? "" : "*") + std::string(p);
-    what += " is ambiguous (SI Brochure 9th ed., 5.4.6; ISO 80000-1): ";
-    what += complete ? "write `" + numerator + "/(" + denominator + ")`"
-                     : "bracket the whole denominator, as in `" + numerator + "/(" + std::string(parts[0]) + "*...)`";
+    for (const auto& p : parts) {
+      if (!denominator.empty()) denominator.push_back('*');
+      denominator.append(p);
+    }
+    // appended piece by piece, not operator+: GCC 12 -Wrestrict false positive at -O3
+    what.append(" is ambiguous (SI Brochure 9th ed., 5.4.6; ISO 80000-1): ");
+    what.append(complete ? "write `" : "bracket the whole denominator, as in `");
+    what.append(numerator);
+    what.append("/(");
+    if (complete) {
+      what.append(denominator);
+      what.append(")`");
+    } else {
+      what.append(parts[0]);
+      what.append("*...)`");
+    }
     fail(unit_error_kind::ambiguous_solidus, op, what);
   }
 };
