@@ -61,6 +61,9 @@ def main():
     ap.add_argument("--schema", choices=["groups", "dim", "scale"])
     ap.add_argument("--stderr", action="append", default=[])
     ap.add_argument("--stdout", action="append", default=[])
+    ap.add_argument("--json-value", action="append", default=[],
+                    help="PATH=VALUE[~RELTOL]: the JSON output at PATH (keys and list indices joined by '.')"
+                         " equals VALUE: a number within RELTOL (default 1e-6), else the JSON literal")
     ap.add_argument("args", nargs=argparse.REMAINDER)
     a = ap.parse_args()
     args = a.args[1:] if a.args and a.args[0] == "--" else a.args
@@ -105,6 +108,32 @@ def main():
         problems = check_schema.check(a.schema, value)
         if problems:
             fail("schema %s: %s" % (a.schema, "; ".join(problems)), out, err)
+
+    if a.json_value:
+        try:
+            value = json.loads(out)
+        except json.JSONDecodeError as e:
+            fail("the output is not JSON: %s" % e, out, err)
+        for spec in a.json_value:
+            path, want = spec.split("=", 1)
+            tol = 1e-6
+            if "~" in want:
+                want, t = want.split("~")
+                tol = float(t)
+            node = value
+            try:
+                for part in path.split("."):
+                    node = node[int(part)] if isinstance(node, list) else node[part]
+            except (KeyError, IndexError, ValueError, TypeError):
+                fail("the JSON output has no %s" % path, out, err)
+            expected = json.loads(want)
+            if isinstance(expected, (int, float)) and not isinstance(expected, bool):
+                ok = isinstance(node, (int, float)) and not isinstance(node, bool) and \
+                    abs(node - expected) <= tol * max(abs(expected), 1e-300)
+            else:
+                ok = node == expected
+            if not ok:
+                fail("%s is %r, expected %s" % (path, node, spec.split("=", 1)[1]), out, err)
 
     if a.golden:
         if os.environ.get("NONDIM_UPDATE_GOLDEN") == "1":

@@ -33,7 +33,9 @@ int run(int argc, char** argv) {
 #endif
   commands.push_back(add_convert(app));
   commands.push_back(add_dim(app));
-  // TMP commands.push_back(add_scale(app));
+#ifdef NONDIM_CLI_WITH_SIMILARITY
+  commands.push_back(add_scale(app));
+#endif
 #ifdef NONDIM_CLI_WITH_ANALYSIS
   commands.push_back(add_demo(app));
 #endif
