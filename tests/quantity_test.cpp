@@ -3,6 +3,7 @@
 
 #include <doctest/doctest.h>
 
+#include <cmath>
 #include <sstream>
 #include <type_traits>
 
@@ -87,6 +88,26 @@ TEST_SUITE("quantity") {
     CHECK(r.si() == doctest::Approx(1.41421356));
     CHECK(pow<3, 2>(4.0 * units::m).si() == doctest::Approx(8.0));
     CHECK(cbrt(27.0 * units::m3) / units::m == doctest::Approx(3.0));
+  }
+
+  TEST_CASE("integer powers are plain products and other exponents cost one std::pow") {
+    // x^4 by squaring is exact for small integers (common practice, no source: 3^4 = 81, 2^-5 = 1/32)
+    CHECK(pow<4>(3.0 * units::m).si() == 81.0);
+    CHECK(pow<-5>(2.0 * units::s).si() == 0.03125);
+    static_assert(pow<4>(3.0 * units::m).si() == 81.0);
+    // 32^(4/5) = (2^5)^(4/5) = 16 and 32^(2/5) = 4 (common practice, no source)
+    const quantity<dims::dimensionless> x = 32.0;
+    CHECK(static_cast<double>(pow<4, 5>(x)) == doctest::Approx(16.0));
+    CHECK(static_cast<double>(pow<2, 5>(x)) == doctest::Approx(4.0));
+    // the value a solver gets from std::pow(Re, 0.8), bit for bit (Dittus-Boelter exponent)
+    const quantity<dims::dimensionless> re = 4.0e4;
+    CHECK(static_cast<double>(pow<4, 5>(re)) == std::pow(4.0e4, 0.8));
+    constexpr double c = pow<4, 5>(quantity<dims::dimensionless>{32.0});
+    static_assert(c > 15.999999 && c < 16.000001);
+    // a negative base with a non-integer exponent is a domain error of std::pow (ISO C 7.12.7.4):
+    // NaN, as std::pow returns; a cube root stays real (std::cbrt, ISO C 7.12.7.1)
+    CHECK(std::isnan(static_cast<double>(pow<4, 5>(quantity<dims::dimensionless>{-32.0}))));
+    CHECK(cbrt(-27.0 * units::m3) / units::m == doctest::Approx(-3.0));
   }
 
   TEST_CASE("transcendental functions take dimensionless values") {

@@ -27,6 +27,28 @@ constexpr R ipow(R x, std::int64_t n) noexcept {
   return inv ? R{1} / r : r;
 }
 
+/// r * x^M by the same squaring as `ipow`, unrolled at compile time: GCC 12 at -O2 keeps the
+/// loop form for M >= 4 (a counted loop per call), which a hand-written x*x*x*x does not pay.
+template <std::uint64_t M, class R>
+constexpr R upow(R r, R x) noexcept {
+  if constexpr (M == 0) {
+    return r;
+  } else if constexpr ((M & 1U) != 0) {
+    return upow<(M >> 1U)>(r * x, x * x);
+  } else {
+    return upow<(M >> 1U)>(r, x * x);
+  }
+}
+/// x^N for a compile-time N; the same products, in the same order, as `ipow(x, N)`.
+template <std::int64_t N, class R>
+constexpr R ipow(R x) noexcept {
+  if constexpr (N < 0) {
+    return R{1} / upow<0 - static_cast<std::uint64_t>(N)>(R{1}, x);
+  } else {
+    return upow<static_cast<std::uint64_t>(N)>(R{1}, x);
+  }
+}
+
 /// m-th root by Newton's method, for constant evaluation where <cmath> is not constexpr.
 template <class R>
 constexpr R const_root(R x, std::int64_t m) noexcept {
@@ -56,11 +78,27 @@ constexpr R root(R x, std::int64_t m) noexcept {
 }  // namespace detail
 
 /// \brief q^(N/M), the dimension raised exactly: `pow<1, 2>(area)` is a length.
+///
+/// The value costs what the same expression on `Rep` costs: an integer power is unrolled
+/// multiplication; a half or a third power is `std::sqrt` or `std::cbrt` (a negative base has
+/// a real cube root), then multiplication; any other exponent is one `std::pow(x, N / M)`, as
+/// a solver writes `std::pow(Re, 0.8)`, so a negative base gives NaN there, like `std::pow`.
 template <std::int64_t N, std::int64_t M = 1, dimension D, class R>
 constexpr quantity<pow(D, rational{N, M}), R> pow(const quantity<D, R>& q) noexcept {
   constexpr rational p{N, M};
-  const R base = p.den == 1 ? q.si() : detail::root(q.si(), p.den);
-  return quantity<pow(D, p), R>::from_si(detail::ipow(base, p.num));
+  using result = quantity<pow(D, p), R>;
+  const R x = q.si();
+  if constexpr (p.den == 1) {
+    return result::from_si(detail::ipow<p.num>(x));
+  } else if constexpr (p.den <= 3) {
+    return result::from_si(detail::ipow<p.num>(detail::root(x, p.den)));
+  } else {
+    if (std::is_constant_evaluated()) {
+      if (x < R{0}) return result::from_si(std::numeric_limits<R>::quiet_NaN());
+      return result::from_si(detail::ipow<p.num>(detail::const_root(x, p.den)));
+    }
+    return result::from_si(std::pow(x, static_cast<R>(p.num) / static_cast<R>(p.den)));
+  }
 }
 template <dimension D, class R>
 constexpr auto sqrt(const quantity<D, R>& q) noexcept {

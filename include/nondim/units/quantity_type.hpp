@@ -84,13 +84,16 @@ class quantity {
       requires(D.is_dimensionless()) {
     return value_;
   }
-  /// Refused: a dimensional value is not a number until divided by a unit.
-  template <scalar T>
-  requires(!D.is_dimensionless()) constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  /// Refused: a dimensional value is not a number until divided by a unit. Deliberately not
+  /// a template: a conversion template lets Clang try every built-in arithmetic operator on
+  /// every quantity expression (most of the front-end time of quantity code; bench/RESULTS.md).
+  /// Conversions to other arithmetic types go through Rep and end here too.
+  constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
+      requires(!D.is_dimensionless()) {
+    static_assert(detail::dimensions_involved<detail::spell<D>, Rep>,
                   "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
                   "(`q / units::m`) or read `q.si()`");
-    return T{};
+    return Rep{};
   }
 
   constexpr quantity operator+() const noexcept { return *this; }

@@ -6,6 +6,7 @@
 #include <string_view>
 
 #include "table.hpp"
+#include "temperature.hpp"  // detail::table_entry
 #include "unit.hpp"
 
 namespace nondim {

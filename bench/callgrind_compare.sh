@@ -1,0 +1,108 @@
+#!/usr/bin/env bash
+# Instruction counts (callgrind Ir, deterministic) of the wall heat-transfer kernel written on
+# nondim quantities and on raw double, at -O2, with each compiler found.
+#
+#   bench/callgrind_compare.sh [--cells N] [--compilers "g++ clang++"] [--include DIR] [--work DIR] [--strict]
+#
+# For every compiler and both forms of the kernel (one expression for Nu; the power terms
+# named), it compiles bench/callgrind_driver.cpp once per kernel (each binary holds one kernel),
+# runs it under `valgrind --tool=callgrind --toggle-collect=<kernel>` so only the kernel and
+# what it calls are counted, and prints per cell:
+#   incl  Ir of the kernel and its callees (libm pow included): the cost a solver pays
+#   self  Ir of the kernel's own instructions
+# and the ratio quantity/double. The target is a ratio of 1 (equal counts). The checksums
+# say whether both kernels produced bit-identical outputs. --strict: exit 1 if any inclusive
+# count differs. --include DIR: use the nondim headers in DIR (an A/B of a library change).
+# Needs valgrind; installs nothing.
+set -euo pipefail
+
+here=$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)
+root=$(cd "$here/.." && pwd)
+cells=100000
+compilers="g++ clang++"
+work=""
+strict=0
+include="$root/include"
+while [[ $# -gt 0 ]]; do
+  case "$1" in
+    --cells) cells=$2; shift 2 ;;
+    --compilers) compilers=$2; shift 2 ;;
+    --work) work=$2; shift 2 ;;
+    --include) include=$(realpath "$2"); shift 2 ;;
+    --strict) strict=1; shift ;;
+    -h|--help) sed -n '2,19p' "$0"; exit 0 ;;
+    *) echo "callgrind_compare.sh: unknown argument '$1' (see --help)" >&2; exit 2 ;;
+  esac
+done
+
+for tool in valgrind callgrind_annotate; do
+  if ! command -v "$tool" >/dev/null 2>&1; then
+    echo "callgrind_compare.sh: '$tool' not found; install valgrind (Debian: apt-get install valgrind)" >&2
+    exit 3
+  fi
+done
+if [[ -z "$work" ]]; then
+  work=$(mktemp -d "${TMPDIR:-/tmp}/nondim-callgrind.XXXXXX")
+  trap 'rm -rf "$work"' EXIT
+fi
+mkdir -p "$work"
+
+flags=(-std=c++20 -O2 -Wall -Wextra -Wpedantic -Wshadow -Wconversion -Wsign-conversion -Werror
+       -I"$include" -I"$here")
+
+# name of the kernel function -> 1 if it is the quantity form
+declare -A is_quantity=([heat_kernel_quantity]=1 [heat_kernel_double]=0
+                        [heat_kernel_quantity_named]=1 [heat_kernel_double_named]=0)
+
+# run KERNEL BINARY: prints "incl self checksum"
+measure() {
+  local kernel=$1 bin=$2 out="$work/$(basename "$2").callgrind"
+  local sum
+  # LD_BIND_NOW: resolve pow@plt before the kernel starts, so lazy binding is not counted
+  sum=$(LD_BIND_NOW=1 valgrind --tool=callgrind --toggle-collect="*::${kernel}(*" \
+          --callgrind-out-file="$out" "$bin" "$cells" 2>"$out.log") \
+    || { echo "callgrind_compare.sh: $bin failed under valgrind, see $out.log" >&2; exit 1; }
+  local incl self
+  incl=$(awk '/^totals:/ {print $2}' "$out")
+  self=$(callgrind_annotate "$out" 2>/dev/null | awk -v k="::${kernel}(" 'index($0, k) {gsub(",", "", $1); print $1; exit}')
+  [[ -n "$incl" && -n "$self" ]] || { echo "callgrind_compare.sh: no counts for $kernel in $out" >&2; exit 1; }
+  echo "$incl $self $sum"
+}
+
+status=0
+printf '%s cells, -O2, callgrind Ir per cell (kernel only)\n' "$cells"
+printf '%-8s %-10s %10s %12s %8s %10s %10s %8s  %s\n' compiler form "incl(qty)" "incl(dbl)" ratio \
+  "self(qty)" "self(dbl)" ratio outputs
+found=0
+for cxx in $compilers; do
+  if ! command -v "$cxx" >/dev/null 2>&1; then
+    echo "callgrind_compare.sh: compiler '$cxx' not found, skipped" >&2
+    continue
+  fi
+  found=1
+  for form in expression named; do
+    suffix=""; [[ $form == named ]] && suffix="_named"
+    declare -A res=()
+    for rep in quantity double; do
+      kernel="heat_kernel_${rep}${suffix}"
+      bin="$work/${cxx//+/x}_${kernel}"
+      "$cxx" "${flags[@]}" -DNONDIM_BENCH_KERNEL="$kernel" -DNONDIM_BENCH_QUANTITY="${is_quantity[$kernel]}" \
+        "$here/callgrind_driver.cpp" -o "$bin"
+      res[$rep]=$(measure "$kernel" "$bin")
+    done
+    read -r qi qs qsum <<<"${res[quantity]}"
+    read -r di ds dsum <<<"${res[double]}"
+    same="bit-identical"; [[ "$qsum" == "$dsum" ]] || same="DIFFER ($qsum vs $dsum)"
+    awk -v c="$cxx" -v f="$form" -v n="$cells" -v qi="$qi" -v di="$di" -v qs="$qs" -v ds="$ds" -v s="$same" \
+      'BEGIN { printf "%-8s %-10s %10.2f %12.2f %8.4f %10.2f %10.2f %8.4f  %s\n",
+               c, f, qi / n, di / n, qi / di, qs / n, ds / n, qs / ds, s }'
+    [[ "$qi" == "$di" ]] || status=1
+    unset res
+  done
+done
+[[ $found == 1 ]] || { echo "callgrind_compare.sh: none of the compilers '$compilers' found" >&2; exit 3; }
+if [[ $status != 0 ]]; then
+  echo "note: inclusive counts differ for at least one compiler/form (target: equal)"
+  [[ $strict == 1 ]] && exit 1
+fi
+exit 0
