@@ -3,6 +3,6 @@
 /// \brief Everything nondim offers. Solver files that only need checked quantities should
 /// include the cheaper <nondim/quantity.hpp>.
 
-#include "analysis/compile_time.hpp"
+#include "analysis.hpp"
 #include "parse.hpp"
 #include "quantity.hpp"

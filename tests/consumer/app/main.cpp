@@ -1,5 +1,6 @@
 // An outside project using nondim's public contract (DESIGN.md), built against nondim
 // either installed (find_package) or as a subdirectory.
+#include <nondim/analysis.hpp>
 #include <nondim/parse.hpp>
 #include <nondim/quantity.hpp>
 
@@ -35,5 +36,16 @@ int main() {
   }
   const bool parsed = h.dim == dims::heat_transfer_coefficient && h.factor > 5.678 && h.factor < 5.679 &&
                       p.si() > 101352.0 && p.si() < 101354.0 && f > 211.999 && f < 212.001 && refused;
-  return (psi > 0.0087 && psi < 0.0088 && parsed) ? 0 : 1;
+  // exact dimensionless groups (nondim/analysis.hpp): drag on a sphere, F/(rho U^2 D^2) and
+  // mu/(rho U D) (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory)
+  problem drag;
+  drag.add("F", "N").add("rho", "kg/m^3").add("U", "m/s").add("D", "mm").add("mu", "Pa*s");
+  options opt;
+  opt.repeating = {"rho", "U", "D"};
+  const analysis an = analyze(drag, opt);
+  const bool grouped = an.rank == 3 && an.groups.size() == 2 && an.groups[0].exponent("U") == rational{-2} &&
+                       an.groups[1].text(text_form::ascii) == "mu*rho^-1*U^-1*D^-1" && an.svd.agrees &&
+                       an.isolated.empty();
+  std::printf("%s", to_string(an).c_str());
+  return (psi > 0.0087 && psi < 0.0088 && parsed && grouped) ? 0 : 1;
 }

@@ -1,0 +1,128 @@
+#pragma once
+/// \file text.hpp
+/// \brief A readable text form of a whole analysis: the dimension matrix as a table, the
+/// rank, the repeating variables, the groups, the isolated variables and the SVD check.
+
+#include <algorithm>
+#include <cstddef>
+#include <cstdio>
+#include <ostream>
+#include <string>
+#include <vector>
+
+#include "../core/format.hpp"
+#include "analyze.hpp"
+#include "detail/cat.hpp"
+#include "result.hpp"
+#include "symbols.hpp"
+
+namespace nondim {
+
+namespace detail {
+
+inline std::string pad_left(const std::string& s, std::size_t width) {
+  const std::size_t w = display_width(s);
+  return w >= width ? s : std::string(width - w, ' ').append(s);
+}
+
+inline std::string short_double(double v) {
+  char buf[32];
+  std::snprintf(buf, sizeof buf, "%.6g", v);
+  return buf;
+}
+
+}  // namespace detail
+
+/// \brief The analysis as text, e.g. (Unicode)
+///
+/// ```
+/// dimension matrix
+///        F   ρ   U   D   μ
+///   L    1  -3   1   1  -1
+///   M    1   1   0   0   1
+///   T   -2   0  -1   0  -1
+/// rank 3
+/// dependent F
+/// repeating ρ, U, D (chosen automatically)
+/// groups (2)
+///   π1 = F·ρ⁻¹·U⁻²·D⁻²
+///   π2 = μ·ρ⁻¹·U⁻¹·D⁻¹
+/// isolated: none
+/// SVD check: rank 3, agrees; singular values ...; max residual 0
+/// ```
+/// Only the base dimensions that appear get a row. ASCII writes `pi1`, `*`, `^-2`, names as given.
+inline std::string to_string(const analysis& a, text_form form = text_form::unicode) {
+  const bool uni = form == text_form::unicode;
+  std::string s = "dimension matrix\n";
+  const std::size_t n = a.variables.size();
+  std::vector<std::string> head(n);
+  std::vector<std::vector<std::string>> cells(n);
+  std::vector<std::size_t> width(n, 0);
+  const std::vector<std::size_t> rows = a.matrix.present_rows();
+  for (std::size_t j = 0; j < n; ++j) {
+    head[j] = display_name(a.variables[j].name, form);
+    width[j] = detail::display_width(head[j]);
+    for (std::size_t i : rows) {
+      cells[j].push_back(to_string(a.matrix(i, j)));
+      width[j] = std::max(width[j], detail::display_width(cells[j].back()));
+    }
+  }
+  std::size_t label = 1;
+  for (std::size_t i : rows) label = std::max(label, detail::display_width(dimension_symbol(i, form)));
+  using detail::cat;
+  s.append(label + 2, ' ');
+  for (std::size_t j = 0; j < n; ++j) s.append("  ").append(detail::pad_left(head[j], width[j]));
+  s.push_back('\n');
+  for (std::size_t r = 0; r < rows.size(); ++r) {
+    s.append("  ").append(detail::pad_left(std::string(dimension_symbol(rows[r], form)), label));
+    for (std::size_t j = 0; j < n; ++j) s.append("  ").append(detail::pad_left(cells[j][r], width[j]));
+    s.push_back('\n');
+  }
+  if (rows.empty()) s.append("  (every variable is dimensionless)\n");
+
+  s.append(cat({"rank ", std::to_string(a.rank), "\n"}));
+  if (a.deficiency.deficient) s.append(cat({"  ", detail::explain_deficiency(a.rank, a.deficiency, form), "\n"}));
+  s.append(cat({"dependent ", display_name(a.dependent, form), "\n"}));
+  s.append("repeating ");
+  for (std::size_t k = 0; k < a.repeating.size(); ++k)
+    s.append(k ? ", " : "").append(display_name(a.repeating[k], form));
+  if (a.repeating.empty()) s.append("none");
+  s.append(a.repeating_given ? " (given)\n" : " (chosen automatically)\n");
+
+  s.append(cat({"groups (", std::to_string(a.groups.size()), ")\n"}));
+  for (std::size_t k = 0; k < a.groups.size(); ++k)
+    s.append(cat({"  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form), "\n"}));
+
+  if (a.isolated.empty()) {
+    s.append("isolated: none\n");
+  } else {
+    s.append("isolated\n");
+    for (std::size_t k = 0; k < a.isolated.size(); ++k) {
+      const auto j = a.index_of(a.isolated[k]);
+      const std::string reason =
+          j ? detail::isolation_reason(a.variables, *j, a.isolated[k] == a.dependent, form) : a.isolated_reasons[k];
+      s.append(cat({"  ", display_name(a.isolated[k], form), ": ", reason, "\n"}));
+    }
+  }
+
+  s.append(cat({"SVD check: rank ", std::to_string(a.svd.rank), a.svd.agrees ? ", agrees" : ", DISAGREES",
+                "; singular values"}));
+  for (std::size_t k = 0; k < a.svd.singular_values.size(); ++k)
+    s.append(k ? ", " : " ").append(detail::short_double(a.svd.singular_values[k]));
+  s.append(cat({"; max residual ", detail::short_double(a.svd.max_residual), "\n"}));
+  for (const auto& note : a.notes)
+    if (note != a.deficiency.explanation) s.append(cat({"note: ", note, "\n"}));
+  return s;
+}
+
+template <class CharT, class Traits>
+std::basic_ostream<CharT, Traits>& operator<<(std::basic_ostream<CharT, Traits>& os, const analysis& a) {
+  return os << to_string(a).c_str();
+}
+
+template <class CharT, class Traits>
+std::basic_ostream<CharT, Traits>& operator<<(std::basic_ostream<CharT, Traits>& os, const pi_group& g) {
+  return os << g.text().c_str();
+}
+
+}  // namespace nondim
