@@ -6,3 +6,4 @@
 #include "analysis.hpp"
 #include "parse.hpp"
 #include "quantity.hpp"
+#include "report.hpp"

@@ -28,17 +28,13 @@ int run(int argc, char** argv) {
   app.footer("Run 'nondim SUBCOMMAND --help' for the options of each subcommand.");
 
   std::vector<subcommand> commands;
-#ifdef NONDIM_CLI_WITH_ANALYSIS
   commands.push_back(add_groups(app));
-#endif
   commands.push_back(add_convert(app));
   commands.push_back(add_dim(app));
 #ifdef NONDIM_CLI_WITH_SIMILARITY
   commands.push_back(add_scale(app));
 #endif
-#ifdef NONDIM_CLI_WITH_ANALYSIS
   commands.push_back(add_demo(app));
-#endif
 
   // An unknown first word would otherwise reach CLI11 as an unexpected positional.
   if (argc >= 2) {

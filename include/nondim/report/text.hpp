@@ -21,7 +21,12 @@ namespace detail {
 /// " = Re⁻¹ (Reynolds number)" for each recognised name.
 inline std::string names_suffix(const pi_group& g, text_form form) {
   std::string s;
-  for (const auto& m : matches_of(g)) s += " = " + m.symbol + exponent_suffix(m.power, form) + " (" + m.name + ")";
+  bool ambiguous = false;
+  for (const auto& m : matches_of(g)) {
+    s += " = " + m.symbol + exponent_suffix(m.power, form) + " (" + m.name + ")";
+    ambiguous = ambiguous || m.ambiguous;
+  }
+  if (ambiguous) s += " [ambiguous: the variables fit more than one named group]";
   return s;
 }
 

@@ -6,6 +6,7 @@
 #include <cstddef>
 #include <string>
 #include <string_view>
+#include <utility>
 #include <vector>
 
 #include "../../analysis.hpp"
@@ -45,14 +46,25 @@ inline std::string comma_list(const std::vector<std::string>& names, text_form f
 
 /// A recognised named group, as the views show it: the group is `symbol^power`.
 struct match_view {
-  std::string name;    ///< "Reynolds number"
-  std::string symbol;  ///< "Re"
-  rational power{1};   ///< the group equals the named group to this power
+  std::string name;        ///< "Reynolds number"
+  std::string symbol;      ///< "Re"
+  rational power{1};       ///< the group equals the named group to this power
+  bool ambiguous = false;  ///< another catalog entry matches the same group too
 };
 
-/// The named groups a group was recognised as (none until the catalog fills `matches`).
-inline std::vector<match_view> matches_of(const pi_group&) {
-  return {};
+/// The named groups a group was recognised as: its `matches` (name, symbol, power, and
+/// `ambiguous` where the catalog gives it), in the catalog's order.
+template <class Group>
+std::vector<match_view> matches_of(const Group& g) {
+  std::vector<match_view> out;
+  if constexpr (requires { g.matches.begin(); }) {
+    for (const auto& m : g.matches) {
+      match_view v{std::string(m.name), std::string(m.symbol), rational{m.power}, false};
+      if constexpr (requires { static_cast<bool>(m.ambiguous); }) v.ambiguous = static_cast<bool>(m.ambiguous);
+      out.push_back(std::move(v));
+    }
+  }
+  return out;
 }
 
 }  // namespace nondim::detail
