@@ -54,4 +54,25 @@ TEST_SUITE("thread safety") {
     for (auto& th : pool) th.join();
     CHECK(caught.load() == threads * 200);  // SI Brochure 9th ed., 5.4.6: a second solidus is refused
   }
+
+  TEST_CASE("analyze gives the same groups from several threads at once") {
+    // drag on a sphere (White, Fluid Mechanics, ch. 5, from memory): F/(rho U^2 D^2) and Re
+    problem p;
+    p.add("F", "N").add("rho", "kg/m^3").add("U", "m/s").add("D", "m").add("mu", "Pa*s");
+    const analysis expected = analyze(p);
+    REQUIRE(expected.groups.size() == 2);
+    std::atomic<int> mismatches{0};
+    std::vector<std::thread> pool;
+    for (int t = 0; t < threads; ++t)
+      pool.emplace_back([&] {
+        for (int r = 0; r < 200; ++r) {
+          const analysis a = analyze(p);
+          if (a.rank != expected.rank || a.repeating != expected.repeating) ++mismatches;
+          for (std::size_t g = 0; g < a.groups.size(); ++g)
+            if (a.groups[g].exponents != expected.groups[g].exponents) ++mismatches;
+        }
+      });
+    for (auto& th : pool) th.join();
+    CHECK(mismatches.load() == 0);
+  }
 }
