@@ -6,4 +6,5 @@
 #include "analysis.hpp"
 #include "parse.hpp"
 #include "quantity.hpp"
+#include "report.hpp"
 #include "similarity.hpp"

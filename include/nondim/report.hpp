@@ -1,0 +1,12 @@
+#pragma once
+/// \file report.hpp
+/// \brief Views of an analysis for people and programs: plain text, Markdown, LaTeX and
+/// JSON (the schema of DESIGN.md). Builds on the analysis layer only; no JSON library.
+
+#include "analysis.hpp"
+
+#include "report/json.hpp"
+#include "report/latex.hpp"
+#include "report/markdown.hpp"
+#include "report/options.hpp"
+#include "report/text.hpp"

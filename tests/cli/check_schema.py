@@ -1,0 +1,193 @@
+#!/usr/bin/python3
+"""Checks the JSON objects of `nondim` against the schemas of DESIGN.md.
+
+groups: beyond the shape, every group must be dimensionless (its exponents applied to the
+variables' dimensions, in exact fractions), have primitive integer exponents, number
+n - rank, and `rank` must be the rank of the dimension matrix computed independently by
+sympy (python3-sympy).
+"""
+import json
+import math
+import sys
+from fractions import Fraction
+
+BASES = ["L", "M", "T", "I", "Theta", "N", "J"]
+
+
+def is_number(x):
+    return isinstance(x, (int, float)) and not isinstance(x, bool)
+
+
+def exponent(x, where, problems):
+    """An exponent: a non-zero integer or a "p/q" string of a non-integer fraction."""
+    if isinstance(x, bool):
+        problems.append("%s: a boolean is not an exponent" % where)
+        return None
+    if isinstance(x, int):
+        if x == 0:
+            problems.append("%s: zero exponents must be left out" % where)
+        return Fraction(x)
+    if isinstance(x, str):
+        try:
+            p, q = x.split("/")
+            f = Fraction(int(p), int(q))
+        except ValueError:
+            problems.append("%s: %r is not p/q" % (where, x))
+            return None
+        if f.denominator == 1 or "%d/%d" % (f.numerator, f.denominator) != x:
+            problems.append("%s: %r must be a reduced non-integer fraction" % (where, x))
+        return f
+    problems.append("%s: %r is not an exponent" % (where, x))
+    return None
+
+
+def dimension(d, where, problems):
+    if not isinstance(d, dict):
+        problems.append("%s: not an object" % where)
+        return {}
+    out = {}
+    for k, v in d.items():
+        if k not in BASES:
+            problems.append("%s: unknown base dimension %r" % (where, k))
+            continue
+        out[k] = exponent(v, "%s.%s" % (where, k), problems) or Fraction(0)
+    order = [b for b in BASES if b in d]
+    if list(d.keys()) != order:
+        problems.append("%s: base dimensions not in the order L M T I Theta N J" % where)
+    return out
+
+
+def keys(obj, where, required, optional, problems):
+    if not isinstance(obj, dict):
+        problems.append("%s: not an object" % where)
+        return False
+    for k in required:
+        if k not in obj:
+            problems.append("%s: missing %r" % (where, k))
+    for k in obj:
+        if k not in required and k not in optional:
+            problems.append("%s: unexpected key %r" % (where, k))
+    return all(k in obj for k in required)
+
+
+def check_groups(v, problems):
+    if not keys(v, "root", ["variables", "rank", "repeating", "groups", "svd_check"], [], problems):
+        return
+    names, dims = [], {}
+    for i, var in enumerate(v["variables"]):
+        w = "variables[%d]" % i
+        if keys(var, w, ["name", "unit", "dimension"], [], problems):
+            if not isinstance(var.get("name"), str) or not isinstance(var.get("unit"), str):
+                problems.append("%s: name and unit must be strings" % w)
+            names.append(var.get("name"))
+            dims[var.get("name")] = dimension(var.get("dimension", {}), w + ".dimension", problems)
+    rank = v["rank"]
+    if not isinstance(rank, int) or isinstance(rank, bool) or rank < 0:
+        problems.append("rank: not a non-negative integer")
+        return
+    try:
+        import sympy
+        m = sympy.Matrix([[sympy.Rational(dims[n].get(b, Fraction(0)).numerator, dims[n].get(b, Fraction(0)).denominator)
+                           for n in names] for b in BASES])
+        if m.rank() != rank:
+            problems.append("rank %d, but sympy finds %d" % (rank, m.rank()))
+    except ImportError:
+        problems.append("python3-sympy is needed for the rank check")
+    rep = v["repeating"]
+    if not isinstance(rep, list) or any(r not in names for r in rep) or len(rep) != rank:
+        problems.append("repeating: must list %d variables of the problem" % rank)
+    groups = v["groups"]
+    if not isinstance(groups, list) or len(groups) != len(names) - rank:
+        problems.append("groups: %d variables of rank %d need %d groups" % (len(names), rank, len(names) - rank))
+        groups = groups if isinstance(groups, list) else []
+    for i, g in enumerate(groups):
+        w = "groups[%d]" % i
+        if not keys(g, w, ["exponents", "text", "latex", "matches"], [], problems):
+            continue
+        total = {b: Fraction(0) for b in BASES}
+        ints = []
+        for name, e in g["exponents"].items():
+            if name not in names:
+                problems.append("%s: %r is not a variable" % (w, name))
+                continue
+            f = exponent(e, "%s.exponents.%s" % (w, name), problems)
+            if f is None:
+                continue
+            if f.denominator == 1:
+                ints.append(abs(f.numerator))
+            for b, x in dims[name].items():
+                total[b] += f * x
+        if any(x != 0 for x in total.values()):
+            problems.append("%s is not dimensionless: %s" % (w, {b: str(x) for b, x in total.items() if x}))
+        if ints and len(ints) == len(g["exponents"]) and math.gcd(*ints) != 1:
+            problems.append("%s: exponents are not primitive (gcd %d)" % (w, math.gcd(*ints)))
+        if not isinstance(g["text"], str) or not isinstance(g["latex"], str):
+            problems.append("%s: text and latex must be strings" % w)
+        if not isinstance(g["matches"], list):
+            problems.append("%s.matches: not a list" % w)
+            continue
+        for k, m in enumerate(g["matches"]):
+            mw = "%s.matches[%d]" % (w, k)
+            if keys(m, mw, ["name", "symbol", "power"], [], problems):
+                if not isinstance(m["name"], str) or not isinstance(m["symbol"], str):
+                    problems.append("%s: name and symbol must be strings" % mw)
+                exponent(m["power"], mw + ".power", problems)
+    s = v["svd_check"]
+    if keys(s, "svd_check", ["rank", "agrees", "singular_values", "max_residual"], [], problems):
+        if not isinstance(s["agrees"], bool) or s["agrees"] != (s["rank"] == rank):
+            problems.append("svd_check.agrees must say whether its rank equals the exact rank")
+        sv = s["singular_values"]
+        if not isinstance(sv, list) or not all(is_number(x) and x >= 0 for x in sv) or sv != sorted(sv, reverse=True):
+            problems.append("svd_check.singular_values: must be non-negative numbers, descending")
+        if not is_number(s["max_residual"]) or s["max_residual"] < 0:
+            problems.append("svd_check.max_residual: must be a non-negative number")
+
+
+def check_dim(v, problems):
+    if not keys(v, "root", ["factor", "dimension"], ["unit", "offset", "canonical"], problems):
+        return
+    if not is_number(v["factor"]) or v["factor"] <= 0:
+        problems.append("factor: must be a positive number")
+    if "offset" in v and not is_number(v["offset"]):
+        problems.append("offset: must be a number")
+    dimension(v["dimension"], "dimension", problems)
+
+
+def check_scale(v, problems):
+    if not keys(v, "root", ["status", "model", "free", "groups", "dependent"], [], problems):
+        return
+    if v["status"] not in ("exact", "partial", "underdetermined"):
+        problems.append("status: %r" % v["status"])
+    if not isinstance(v["model"], dict) or not all(is_number(x) for x in v["model"].values()):
+        problems.append("model: must map names to numbers")
+    if not isinstance(v["free"], list) or not all(isinstance(x, str) for x in v["free"]):
+        problems.append("free: must be a list of names")
+    if (v["status"] == "underdetermined") != bool(v["free"]):
+        problems.append("free: must be non-empty exactly when the status is underdetermined")
+    for i, g in enumerate(v["groups"] if isinstance(v["groups"], list) else []):
+        w = "groups[%d]" % i
+        if keys(g, w, ["exponents", "prototype", "model", "ratio", "matched"], [], problems):
+            for name, e in g["exponents"].items():
+                exponent(e, "%s.exponents.%s" % (w, name), problems)
+            for k in ("prototype", "model", "ratio"):
+                if not (is_number(g[k]) or g[k] is None):
+                    problems.append("%s.%s: must be a number" % (w, k))
+            if not isinstance(g["matched"], bool):
+                problems.append("%s.matched: must be a boolean" % w)
+    d = v["dependent"]
+    if keys(d, "dependent", ["name", "prototype_over_model"], ["approximate"], problems):
+        if not isinstance(d["name"], str) or not (is_number(d["prototype_over_model"]) or d["prototype_over_model"] is None):
+            problems.append("dependent: name must be a string, prototype_over_model a number")
+
+
+def check(schema, value):
+    problems = []
+    {"groups": check_groups, "dim": check_dim, "scale": check_scale}[schema](value, problems)
+    return problems
+
+
+if __name__ == "__main__":
+    found = check(sys.argv[1], json.load(sys.stdin))
+    for p in found:
+        print(p)
+    sys.exit(1 if found else 0)

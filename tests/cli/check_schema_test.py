@@ -1,0 +1,66 @@
+#!/usr/bin/python3
+"""The schema checker must reject JSON that breaks the schema of DESIGN.md, or the schema
+cases prove nothing. A valid object (the drag groups F/(rho U^2 D^2) and mu/(rho U D),
+White, Fluid Mechanics, 7th ed., section 5.3) passes; each broken copy must fail."""
+import copy
+import os
+import sys
+
+sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+import check_schema  # noqa: E402
+
+good = {
+    "variables": [
+        {"name": "F", "unit": "N", "dimension": {"L": 1, "M": 1, "T": -2}},
+        {"name": "rho", "unit": "kg/m^3", "dimension": {"L": -3, "M": 1}},
+        {"name": "U", "unit": "m/s", "dimension": {"L": 1, "T": -1}},
+        {"name": "D", "unit": "m", "dimension": {"L": 1}},
+        {"name": "mu", "unit": "Pa*s", "dimension": {"L": -1, "M": 1, "T": -1}},
+    ],
+    "rank": 3,
+    "repeating": ["rho", "U", "D"],
+    "groups": [
+        {"exponents": {"F": 1, "rho": -1, "U": -2, "D": -2}, "text": "", "latex": "", "matches": []},
+        {"exponents": {"mu": 1, "rho": -1, "U": -1, "D": -1}, "text": "", "latex": "",
+         "matches": [{"name": "Reynolds number", "symbol": "Re", "power": -1}]},
+    ],
+    "svd_check": {"rank": 3, "agrees": True, "singular_values": [3.7, 2.8, 0.37], "max_residual": 0.0},
+}
+
+
+def broken(edit):
+    v = copy.deepcopy(good)
+    edit(v)
+    return v
+
+
+cases = {
+    "not dimensionless": broken(lambda v: v["groups"][0]["exponents"].update(D=-1)),
+    "not primitive": broken(lambda v: v["groups"][0]["exponents"].update(F=2, rho=-2, U=-4, D=-4)),
+    "zero exponent listed": broken(lambda v: v["groups"][0]["exponents"].update(mu=0)),
+    "wrong rank": broken(lambda v: v.update(rank=2)),
+    "missing group": broken(lambda v: v["groups"].pop()),
+    "extra key": broken(lambda v: v.update(extra=1)),
+    "integer as p/q": broken(lambda v: v["variables"][3]["dimension"].update(L="2/1")),
+    "unreduced fraction": broken(lambda v: v["variables"][3]["dimension"].update(L="2/4")),
+    "svd disagreement hidden": broken(lambda v: v["svd_check"].update(rank=2)),
+    "unsorted singular values": broken(lambda v: v["svd_check"].update(singular_values=[0.37, 3.7, 2.8])),
+    "match without power": broken(lambda v: v["groups"][1]["matches"][0].pop("power")),
+    "unknown base": broken(lambda v: v["variables"][3]["dimension"].update(X=1)),
+}
+
+failures = 0
+if check_schema.check("groups", good):
+    print("FAIL: the valid object is rejected:", check_schema.check("groups", good))
+    failures += 1
+for name, value in cases.items():
+    if not check_schema.check("groups", value):
+        print("FAIL: not rejected:", name)
+        failures += 1
+for name, value in {"negative factor": {"factor": -1, "dimension": {}},
+                    "no dimension": {"factor": 1.0}}.items():
+    if not check_schema.check("dim", value):
+        print("FAIL: not rejected:", name)
+        failures += 1
+print("%d passed, %d failed" % (len(cases) + 3 - failures, failures))
+sys.exit(1 if failures else 0)

@@ -1,0 +1,113 @@
+// The problem-file loader of the nondim program: the schema of DESIGN.md (variables keep
+// their order; title, dependent, repeating, name, unit, note, prototype, model), and every
+// fault named with its key and line. TOML syntax per the TOML 1.0.0 specification.
+#include <doctest/doctest.h>
+
+#include <string>
+
+#include "messages.hpp"
+#include "problem_file.hpp"
+
+using nondim::tool::input_error;
+using nondim::tool::parse_problem_text;
+
+namespace {
+std::string message_of(const std::string& text) {
+  try {
+    (void)parse_problem_text(text, "p.toml");
+  } catch (const input_error& e) {
+    return e.what();
+  }
+  return "no error";
+}
+}  // namespace
+
+TEST_SUITE("problem file") {
+  TEST_CASE("every key of the schema is read and the variables keep their order") {
+    const auto f = parse_problem_text(
+        "title = \"Drag\"\ndependent = \"F\"\nrepeating = [\"rho\", \"U\", \"D\"]\n"
+        "[[variable]]\nname = \"U\"\nunit = \"m/s\"\nprototype = 3\nmodel = 1.5\nnote = \"speed\"\n"
+        "[[variable]]\nname = \"F\"\nunit = \"N\"\n",
+        "p.toml");
+    CHECK(f.title == "Drag");
+    CHECK(f.dependent == "F");
+    CHECK(f.dependent_where.line == 2);
+    CHECK(f.repeating == std::vector<std::string>{"rho", "U", "D"});
+    REQUIRE(f.variables.size() == 2);
+    CHECK(f.variables[0].name == "U");  // file order, not sorted
+    CHECK(f.variables[1].name == "F");
+    CHECK(f.variables[0].unit == "m/s");
+    CHECK(f.variables[0].note == "speed");
+    CHECK(*f.variables[0].prototype == 3.0);  // a TOML integer is a number too
+    CHECK(*f.variables[0].model == 1.5);
+    CHECK_FALSE(f.variables[1].prototype.has_value());
+    CHECK(f.variables[0].where.line == 4);
+    CHECK(f.variables[0].unit_where.line == 6);
+    CHECK(f.variables[0].unit_where.column == 9);  // `unit = "m/s"`: m is the 9th character
+    CHECK(f.variables[0].unit_literal);
+  }
+
+  TEST_CASE("an escaped unit string is marked as not mapping onto the file") {
+    const auto f = parse_problem_text("[[variable]]\nname = \"A\"\nunit = \"\\u00b5m\"\n", "p.toml");
+    CHECK(f.variables[0].unit == "\u00b5m");
+    CHECK_FALSE(f.variables[0].unit_literal);
+  }
+
+  TEST_CASE("unknown keys are named with their line") {
+    CHECK(message_of("titel = \"x\"\n[[variable]]\nname = \"F\"\nunit = \"N\"\n") ==
+          "nondim: p.toml:1: unknown key 'titel' (a problem file takes title, dependent, repeating and [[variable]] "
+          "tables)");
+    CHECK(
+        message_of("[[variable]]\nname = \"F\"\nunits = \"N\"\n").find("p.toml:3: unknown key 'units' in variable 1") !=
+        std::string::npos);
+  }
+
+  TEST_CASE("values of the wrong type are named with their line") {
+    CHECK(message_of("title = 3\n[[variable]]\nname = \"F\"\nunit = \"N\"\n") ==
+          "nondim: p.toml:1: 'title' must be a string, not an integer");
+    CHECK(message_of("repeating = \"rho\"\n[[variable]]\nname = \"F\"\nunit = \"N\"\n")
+              .find("p.toml:1: 'repeating' must be an array of names, not a string") != std::string::npos);
+    CHECK(message_of("repeating = [1]\n[[variable]]\nname = \"F\"\nunit = \"N\"\n")
+              .find("each name in 'repeating' must be a string, not an integer") != std::string::npos);
+    CHECK(message_of("[[variable]]\nname = \"F\"\nunit = \"N\"\nmodel = true\n") ==
+          "nondim: p.toml:4: 'model' of variable 1 must be a number, not a boolean");
+    CHECK(message_of("variable = 3\n").find("p.toml:1: 'variable' must be an array of tables") != std::string::npos);
+    CHECK(message_of("variable = [1]\n").find("p.toml:1: variable 1 must be a table, not an integer") !=
+          std::string::npos);
+  }
+
+  TEST_CASE("non-finite values are refused (TOML allows inf and nan)") {
+    CHECK(message_of("[[variable]]\nname = \"F\"\nunit = \"N\"\nprototype = inf\n") ==
+          "nondim: p.toml:4: 'prototype' of variable 1 must be a finite number");
+    CHECK(message_of("[[variable]]\nname = \"F\"\nunit = \"N\"\nmodel = nan\n") ==
+          "nondim: p.toml:4: 'model' of variable 1 must be a finite number");
+  }
+
+  TEST_CASE("missing names and units, duplicates and an empty problem are errors") {
+    CHECK(message_of("[[variable]]\nunit = \"N\"\n") == "nondim: p.toml:1: variable 1 has no 'name'");
+    CHECK(message_of("[[variable]]\nname = \"F\"\n").find("p.toml:1: variable 1 ('F') has no 'unit'") !=
+          std::string::npos);
+    CHECK(message_of("[[variable]]\nname = \"F\"\nunit = \"N\"\n[[variable]]\nname = \"F\"\nunit = \"N\"\n") ==
+          "nondim: p.toml:4: variable 2: the name 'F' is already used by the variable at line 1");
+    CHECK(message_of("title = \"x\"\n") ==
+          "nondim: p.toml: no [[variable]] tables: a problem needs at least one variable");
+    CHECK(message_of("[[variable]]\nname = \"a,b\"\nunit = \"N\"\n").find("p.toml:2:") != std::string::npos);
+    CHECK(message_of("[[variable]]\nname = \"\"\nunit = \"N\"\n").find("must not be empty") != std::string::npos);
+  }
+
+  TEST_CASE("TOML syntax errors give the line of the fault") {
+    // TOML 1.0.0: a key needs a value; a table may not be defined twice
+    CHECK(message_of("title =\n").find("nondim: p.toml:1: not valid TOML") == 0);
+    CHECK(message_of("[a]\n[a]\n").find("nondim: p.toml:2: not valid TOML") == 0);
+  }
+
+  TEST_CASE("a file that cannot be read is named") {
+    try {
+      (void)nondim::tool::load_problem_file("/nonexistent/dir/p.toml");
+      FAIL("no error");
+    } catch (const input_error& e) {
+      CHECK(std::string(e.what()) ==
+            "nondim: cannot read the problem file '/nonexistent/dir/p.toml': No such file or directory");
+    }
+  }
+}

@@ -1,0 +1,143 @@
+// Tests of nondim/report: the text, Markdown, LaTeX and JSON views of an analysis.
+// Groups are those of textbook problems (source beside each); JSON is read back with
+// nlohmann-json (RFC 8259 parser) to check the escaping and the numbers.
+#include <nondim/report.hpp>
+
+#include <doctest/doctest.h>
+#include <nlohmann/json.hpp>
+
+#include <cmath>
+#include <limits>
+#include <string>
+
+using namespace nondim;
+
+namespace {
+// Drag on a sphere: F = f(rho, U, D, mu) gives F/(rho U^2 D^2) and mu/(rho U D)
+// (White, Fluid Mechanics, 7th ed., section 5.3).
+analysis drag() {
+  problem p;
+  p.add("F", "N").add("rho", "kg/m^3").add("U", "m/s").add("D", "m").add("mu", "Pa*s");
+  return analyze(p);
+}
+bool contains(const std::string& s, const std::string& part) {
+  return s.find(part) != std::string::npos;
+}
+}  // namespace
+
+TEST_SUITE("report") {
+  TEST_CASE("variable names are written in LaTeX with Greek letters and subscripts") {
+    // Greek macros of plain LaTeX (Lamport, LaTeX: A Document Preparation System, table 3.3): common practice
+    CHECK(latex_name("rho") == "\\rho");
+    CHECK(latex_name("mu") == "\\mu");
+    CHECK(latex_name("nu") == "\\nu");
+    CHECK(latex_name("sigma") == "\\sigma");
+    CHECK(latex_name("alpha") == "\\alpha");
+    CHECK(latex_name("beta") == "\\beta");
+    CHECK(latex_name("Delta") == "\\Delta");
+    CHECK(latex_name("eps") == "\\varepsilon");
+    CHECK(latex_name("mu_w") == "\\mu_{w}");
+    CHECK(latex_name("D_h") == "D_{h}");
+    CHECK(latex_name("T_inf") == "T_{\\mathrm{inf}}");
+    CHECK(latex_name("L1") == "L_{1}");
+    CHECK(latex_name("dp") == "\\mathrm{dp}");
+    CHECK(latex_name("rhoU") == "\\mathrm{rhoU}");  // not a Greek name followed by '_' or a digit
+    CHECK(latex_name("a#b") == "\\mathrm{a\\#b}");  // special characters escaped
+    CHECK(latex_name("x_{") == "x_{\\mathrm{\\{}}");
+  }
+
+  TEST_CASE("a group is a LaTeX fraction, non-repeating variable first") {
+    const analysis a = drag();
+    REQUIRE(a.groups.size() == 2);
+    CHECK(latex(a.groups[0]) == "\\frac{F}{\\rho U^{2} D^{2}}");  // White, 7th ed., 5.3: drag coefficient form
+    CHECK(latex(a.groups[1]) == "\\frac{\\mu}{\\rho U D}");       // the inverse of Re = rho U D / mu
+    const std::string tex = latex_report(a);
+    CHECK(contains(tex, "\\[ \\Pi_{1} = \\frac{F}{\\rho U^{2} D^{2}}"));
+    CHECK(contains(tex, "\\[ \\Pi_{2} = \\frac{\\mu}{\\rho U D}"));
+  }
+
+  TEST_CASE("a group with only negative exponents has 1 over, one with only positive ones no fraction") {
+    // the pendulum: t^2 g / L (Fox and McDonald, 8th ed., 7.2); written with L first it is L/(t^2 g)
+    problem p;
+    p.add("L", "m").add("t", "s").add("g", "m/s^2");
+    const analysis a = analyze(p);
+    REQUIRE(a.groups.size() == 1);
+    CHECK(latex(a.groups[0]) == "\\frac{L}{t^{2} g}");
+  }
+
+  TEST_CASE("the text view has the matrix by variable, the rank, the groups, the exclusions and the SVD line") {
+    problem p;  // the pendulum with its mass: m is in no group (Fox and McDonald, 8th ed., 7.2)
+    p.add("t", "s").add("L", "m").add("m", "kg").add("g", "m/s^2");
+    const std::string t = text_report(analyze(p), report_options{"Pendulum", {"period", "", "", ""}});
+    CHECK(t.rfind("Pendulum\n\ndimension matrix\n", 0) == 0);
+    CHECK(contains(t, "  variable  unit   L  M   T  note\n"));
+    CHECK(contains(t, "  t         s      0  0   1  period\n"));
+    CHECK(contains(t, "  g         m/s^2  1  0  -2\n"));
+    CHECK(contains(t, "rank 3\n"));
+    CHECK(contains(t, "  \u03a01 = t\u00b2\u00b7L\u207b\u00b9\u00b7g\n"));
+    CHECK(contains(t, "excluded (in no group)\n  m: "));
+    CHECK(contains(t, "SVD check: rank 3, agrees"));
+  }
+
+  TEST_CASE("the Markdown view is tables with escaped cells") {
+    problem p;
+    p.add("l_b", "mm").add("D", "mm");
+    const std::string m = markdown_report(analyze(p), report_options{"A | B", {}});
+    CHECK(m.rfind("## A \\| B\n", 0) == 0);
+    CHECK(contains(m, "| variable | unit | L |\n| :-- | :-- | --: |\n| l\\_b | mm | 1 |\n"));
+    CHECK(contains(m, "| \u03a01 | l\\_b\u00b7D\u207b\u00b9 |"));
+  }
+
+  TEST_CASE("the JSON view follows the schema of DESIGN.md") {
+    const auto j = nlohmann::json::parse(json_report(drag()));
+    CHECK(j.size() == 5);
+    CHECK(j["rank"] == 3);
+    CHECK(j["repeating"] == nlohmann::json::array({"rho", "U", "D"}));
+    CHECK(j["variables"][0] ==
+          nlohmann::json::parse(R"({"name": "F", "unit": "N", "dimension": {"L": 1, "M": 1, "T": -2}})"));
+    CHECK(j["variables"][3]["dimension"] == nlohmann::json::parse(R"({"L": 1})"));  // only non-zero exponents
+    CHECK(j["groups"][0]["exponents"] == nlohmann::json::parse(R"({"F": 1, "rho": -1, "U": -2, "D": -2})"));
+    CHECK(j["groups"][0]["latex"] == "\\frac{F}{\\rho U^{2} D^{2}}");
+    CHECK(j["groups"][0]["text"] == "F*rho^-1*U^-2*D^-2");
+    CHECK(j["groups"][0]["matches"].is_array());
+    CHECK(j["svd_check"]["rank"] == 3);
+    CHECK(j["svd_check"]["agrees"] == true);
+    CHECK(j["svd_check"]["singular_values"].size() == 5);  // min(7, n)
+    CHECK(j["svd_check"]["max_residual"] == 0.0);
+  }
+
+  TEST_CASE("a fractional exponent is the string p/q in JSON") {
+    problem p;  // K = Y sigma sqrt(pi a) (Anderson, Fracture Mechanics, 3rd ed., 2.6): K in Pa*m^(1/2)
+    p.add("sigma", "MPa").add("K", "MPa*m^(1/2)").add("a", "mm");
+    const auto j = nlohmann::json::parse(json_report(analyze(p)));
+    CHECK(j["variables"][1]["dimension"]["L"] == "-1/2");
+    CHECK(j["groups"][0]["exponents"] == nlohmann::json::parse(R"({"sigma": 2, "K": -2, "a": 1})"));
+  }
+
+  TEST_CASE("JSON strings are escaped per RFC 8259 and invalid UTF-8 is replaced") {
+    std::string out;
+    detail::write_json_string(out, "a\"b\\c\n\t\x01 \xce\xbc \xff");
+    CHECK(out == "\"a\\\"b\\\\c\\n\\t\\u0001 \xce\xbc \\ufffd\"");
+    CHECK(nlohmann::json::parse(out) == "a\"b\\c\n\t\x01 \xce\xbc \xef\xbf\xbd");
+    out.clear();
+    detail::write_json_string(out, "\xed\xa0\x80");  // a UTF-16 surrogate in UTF-8 is not UTF-8 (RFC 3629)
+    CHECK(out == "\"\\ufffd\\ufffd\\ufffd\"");
+  }
+
+  TEST_CASE("JSON numbers are the shortest decimal that reads back to the same double") {
+    for (const double x : {0.1, 1.0 / 3.0, 6.02214076e23, 5e-324, std::numeric_limits<double>::max(), -2.5, 1e21}) {
+      std::string out;
+      detail::write_json_number(out, x);
+      CHECK(nlohmann::json::parse(out).get<double>() == x);
+    }
+    std::string out;
+    detail::write_json_number(out, 0.1);
+    CHECK(out == "0.1");
+    out.clear();
+    detail::write_json_number(out, std::nan(""));  // JSON has no NaN
+    CHECK(out == "null");
+    out.clear();
+    detail::write_json_number(out, -0.0);
+    CHECK(out == "0");
+  }
+}

@@ -1,0 +1,74 @@
+/// \file cmd_groups.cpp
+/// \brief `nondim groups`: the dimensionless groups of a problem given as NAME=UNIT
+/// arguments or in a problem file, as text, Markdown, LaTeX or JSON.
+
+#include <memory>
+#include <ostream>
+#include <string>
+#include <vector>
+
+#include <CLI/CLI.hpp>
+#include <nondim/report.hpp>
+
+#include "commands.hpp"
+#include "messages.hpp"
+#include "problem_input.hpp"
+
+namespace nondim::tool {
+
+namespace {
+struct groups_args {
+  std::vector<std::string> variables;
+  std::string file;
+  std::string repeating;
+  std::string dependent;
+  std::string basis;
+  std::string format = "text";
+};
+}  // namespace
+
+subcommand add_groups(CLI::App& app) {
+  auto args = std::make_shared<groups_args>();
+  CLI::App* sub = app.add_subcommand("groups", "Find the dimensionless groups of a problem (Buckingham pi, exact)");
+  sub->add_option("NAME=UNIT", args->variables,
+                  "The variables, dependent one first unless --dependent says otherwise: F=N rho=kg/m^3 U=m/s D=m "
+                  "mu=Pa*s");
+  sub->add_option("-f,--file", args->file, "Read the problem from a TOML problem file instead");
+  sub->add_option("-r,--repeating", args->repeating,
+                  "The repeating variables, comma separated (as many as the rank); default: chosen automatically");
+  sub->add_option("-d,--dependent", args->dependent, "The dependent variable; default: the first");
+  sub->add_option("-b,--basis", args->basis,
+                  "classical: one non-repeating variable per group; named: re-expressed in named groups (Reynolds, "
+                  "Prandtl...) where possible")
+      ->check(CLI::IsMember({"classical", "named"}))
+      ->default_str("classical");
+  sub->add_option("--format", args->format, "Output format")
+      ->check(CLI::IsMember({"text", "markdown", "latex", "json"}))
+      ->default_str("text");
+  sub->footer(
+      "Options given on the command line override those in the file.\n"
+      "Examples:\n"
+      "  nondim groups F=N rho=kg/m^3 U=m/s D=m mu=Pa*s\n"
+      "  nondim groups --file pod.toml --repeating rho,U,D --format latex");
+  return {
+      sub, [args](std::ostream& out) {
+        if (!args->file.empty() && !args->variables.empty())
+          throw input_error(with_prefix("give the variables either as NAME=UNIT arguments or with --file, not both"));
+        problem_input in = args->file.empty() ? problem_from_arguments(args->variables) : problem_from_file(args->file);
+        if (!args->dependent.empty()) override_dependent(in, args->dependent);
+        if (!args->repeating.empty()) override_repeating(in, args->repeating);
+        if (!args->basis.empty()) in.options.form = args->basis == "named" ? basis::named : basis::classical;
+        const analysis a = analyze_input(in);
+        if (args->format == "json") {
+          out << json_report(a);
+        } else if (args->format == "markdown") {
+          out << markdown_report(a, in.report);
+        } else if (args->format == "latex") {
+          out << latex_report(a, in.report);
+        } else {
+          out << text_report(a, in.report);
+        }
+      }};
+}
+
+}  // namespace nondim::tool

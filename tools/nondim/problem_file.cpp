@@ -1,0 +1,226 @@
+#include "problem_file.hpp"
+
+#include <cerrno>
+#include <cmath>
+#include <cstring>
+#include <filesystem>
+#include <fstream>
+#include <sstream>
+#include <utility>
+
+// header-only: see CMakeLists.txt
+#define TOML_HEADER_ONLY 1
+#include <toml++/toml.h>
+
+#include "messages.hpp"
+
+namespace nondim::tool {
+
+namespace {
+
+file_position position_of(const toml::source_region& r) {
+  return {r.begin.line, r.begin.column};
+}
+
+std::string_view type_name(const toml::node& n) {
+  switch (n.type()) {
+    case toml::node_type::string:
+      return "a string";
+    case toml::node_type::integer:
+      return "an integer";
+    case toml::node_type::floating_point:
+      return "a floating-point number";
+    case toml::node_type::boolean:
+      return "a boolean";
+    case toml::node_type::date:
+      return "a date";
+    case toml::node_type::time:
+      return "a time";
+    case toml::node_type::date_time:
+      return "a date-time";
+    case toml::node_type::array:
+      return "an array";
+    case toml::node_type::table:
+      return "a table";
+    case toml::node_type::none:
+      break;
+  }
+  return "nothing";
+}
+
+class checker {
+ public:
+  checker(std::string_view text, const problem_file& out) : text_(text), out_(out) {}
+
+  [[noreturn]] void fail(const toml::source_region& where, const std::string& what) const {
+    throw input_error(with_prefix(out_.at(position_of(where)) + what));
+  }
+
+  std::string string_value(const toml::node& n, std::string_view what) const {
+    const auto* s = n.as_string();
+    if (s == nullptr) fail(n.source(), std::string(what) + " must be a string, not " + std::string(type_name(n)));
+    return s->get();
+  }
+
+  double number_value(const toml::node& n, std::string_view what) const {
+    if (!n.is_number()) fail(n.source(), std::string(what) + " must be a number, not " + std::string(type_name(n)));
+    const double v = n.is_integer() ? static_cast<double>(n.as_integer()->get()) : n.as_floating_point()->get();
+    if (!std::isfinite(v)) fail(n.source(), std::string(what) + " must be a finite number");
+    return v;
+  }
+
+  /// The raw text of `line` (1-based) of the file.
+  std::string_view line_text(std::size_t line) const {
+    std::size_t start = 0;
+    for (std::size_t l = 1; l < line; ++l) {
+      const std::size_t nl = text_.find('\n', start);
+      if (nl == std::string_view::npos) return {};
+      start = nl + 1;
+    }
+    const std::size_t end = text_.find('\n', start);
+    return text_.substr(start, end == std::string_view::npos ? std::string_view::npos : end - start);
+  }
+
+  /// Whether the string `value` at `where` is written literally between single quote
+  /// characters on one line, so that a column inside it maps onto the file.
+  bool written_literally(const toml::source_region& where, const std::string& value) const {
+    const std::string_view line = line_text(where.begin.line);
+    std::size_t byte = 0;  // the byte where code point number `begin.column` starts
+    for (std::size_t cp = 0; byte < line.size(); ++byte)
+      if ((static_cast<unsigned char>(line[byte]) & 0xC0U) != 0x80U && ++cp == where.begin.column) break;
+    if (byte >= line.size() || (line[byte] != '"' && line[byte] != '\'')) return false;
+    const char quote = line[byte];
+    const std::string_view rest = line.substr(byte + 1);
+    return rest.substr(0, value.size()) == value && rest.size() > value.size() && rest[value.size()] == quote &&
+           (quote == '\'' || value.find('\\') == std::string::npos);
+  }
+
+ private:
+  std::string_view text_;
+  const problem_file& out_;
+};
+
+void read_variable(const checker& c, const toml::table& t, std::size_t index, problem_file& out) {
+  file_variable v;
+  v.where = position_of(t.source());
+  const std::string label = "variable " + std::to_string(index);
+  bool has_name = false;
+  bool has_unit = false;
+  for (auto&& [key, node] : t) {
+    const std::string_view k = key.str();
+    if (k == "name") {
+      v.name = c.string_value(node, "'name' of " + label);
+      if (const auto why = bad_variable_name(v.name)) c.fail(node.source(), "'name' of " + label + ": " + *why);
+      has_name = true;
+    } else if (k == "unit") {
+      v.unit = c.string_value(node, "'unit' of " + label);
+      v.unit_where = position_of(node.source());
+      v.unit_where.column += 1;  // past the opening quote
+      v.unit_literal = c.written_literally(node.source(), v.unit);
+      v.unit_line_text = std::string(c.line_text(node.source().begin.line));
+      has_unit = true;
+    } else if (k == "note") {
+      v.note = c.string_value(node, "'note' of " + label);
+    } else if (k == "prototype") {
+      v.prototype = c.number_value(node, "'prototype' of " + label);
+    } else if (k == "model") {
+      v.model = c.number_value(node, "'model' of " + label);
+    } else {
+      c.fail(key.source(), "unknown key '" + std::string(k) + "' in " + label +
+                               " (a [[variable]] table takes name, unit, note, prototype, model)");
+    }
+  }
+  if (!has_name) c.fail(t.source(), label + " has no 'name'");
+  if (!has_unit) c.fail(t.source(), label + " ('" + v.name + "') has no 'unit' (write unit = \"1\" for a pure number)");
+  if (const file_variable* before = out.find(v.name))
+    c.fail(t.source(), label + ": the name '" + v.name + "' is already used by the variable at line " +
+                           std::to_string(before->where.line));
+  out.variables.push_back(std::move(v));
+}
+
+}  // namespace
+
+const file_variable* problem_file::find(std::string_view name) const {
+  for (const auto& v : variables)
+    if (v.name == name) return &v;
+  return nullptr;
+}
+
+std::string problem_file::at(const file_position& p) const {
+  if (p.line == 0) return path + ": ";
+  return path + ":" + std::to_string(p.line) + ": ";
+}
+
+std::optional<std::string> bad_variable_name(std::string_view name) {
+  if (name.empty()) return "a variable name must not be empty";
+  for (const char ch : name) {
+    const auto u = static_cast<unsigned char>(ch);
+    if (u < 0x20U || u == 0x7FU || ch == ' ')
+      return "the variable name '" + std::string(name) + "' has white space or a control character";
+    if (ch == '=' || ch == ',')
+      return "the variable name '" + std::string(name) + "' has a '" + std::string(1, ch) +
+             "' (names may not contain '=' or ',')";
+  }
+  return std::nullopt;
+}
+
+problem_file parse_problem_text(std::string_view text, const std::string& path) {
+  problem_file out;
+  out.path = path;
+  toml::table root;
+  try {
+    root = toml::parse(text, path);
+  } catch (const toml::parse_error& e) {
+    throw input_error(with_prefix(out.at(position_of(e.source())) + "not valid TOML: " + std::string(e.description())));
+  }
+  const checker c(text, out);
+  const toml::array* variables = nullptr;
+  for (auto&& [key, node] : root) {
+    const std::string_view k = key.str();
+    if (k == "title") {
+      out.title = c.string_value(node, "'title'");
+    } else if (k == "dependent") {
+      out.dependent = c.string_value(node, "'dependent'");
+      out.dependent_where = position_of(node.source());
+    } else if (k == "repeating") {
+      const toml::array* a = node.as_array();
+      if (a == nullptr)
+        c.fail(node.source(), "'repeating' must be an array of names, not " + std::string(type_name(node)));
+      out.repeating_where = position_of(node.source());
+      for (const toml::node& e : *a) out.repeating.push_back(c.string_value(e, "each name in 'repeating'"));
+    } else if (k == "variable") {
+      variables = node.as_array();
+      if (variables == nullptr)
+        c.fail(node.source(),
+               "'variable' must be an array of tables ([[variable]]), not " + std::string(type_name(node)));
+    } else {
+      c.fail(key.source(), "unknown key '" + std::string(k) +
+                               "' (a problem file takes title, dependent, repeating and [[variable]] tables)");
+    }
+  }
+  if (variables == nullptr || variables->empty())
+    throw input_error(with_prefix(out.at({}) + "no [[variable]] tables: a problem needs at least one variable"));
+  std::size_t index = 0;
+  for (const toml::node& e : *variables) {
+    ++index;
+    const toml::table* t = e.as_table();
+    if (t == nullptr)
+      c.fail(e.source(), "variable " + std::to_string(index) + " must be a table, not " + std::string(type_name(e)));
+    read_variable(c, *t, index, out);
+  }
+  return out;
+}
+
+problem_file load_problem_file(const std::string& path) {
+  std::error_code ec;
+  if (std::filesystem::is_directory(path, ec))
+    throw input_error(with_prefix("cannot read the problem file '" + path + "': it is a directory"));
+  std::ifstream in(path, std::ios::binary);
+  if (!in) throw input_error(with_prefix("cannot read the problem file '" + path + "': " + std::strerror(errno)));
+  std::ostringstream buffer;
+  buffer << in.rdbuf();
+  if (in.bad()) throw input_error(with_prefix("cannot read the problem file '" + path + "'"));
+  return parse_problem_text(buffer.str(), path);
+}
+
+}  // namespace nondim::tool

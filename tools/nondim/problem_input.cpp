@@ -1,0 +1,129 @@
+#include "problem_input.hpp"
+
+#include <algorithm>
+#include <utility>
+
+#include <nondim/parse.hpp>
+
+#include "messages.hpp"
+#include "units_text.hpp"
+
+namespace nondim::tool {
+
+namespace {
+
+/// "nondim: <what>: <parser message>" and the file line with a caret under the fault.
+[[noreturn]] void bad_file_unit(const problem_file& f, const file_variable& v, const unit_error& e) {
+  std::string m =
+      with_prefix(f.at(v.unit_where) + "unit of variable '" + v.name + "': " + std::string(bare_message(e)));
+  if (v.unit_literal && v.unit_line_text.size() <= 200)
+    m += "\n" + caret_block(v.unit_line_text, v.unit_where.column + e.column() - 1);
+  else if (v.unit.size() <= 200)
+    m += "\n" + caret_block(v.unit, e.column());
+  throw input_error(m);
+}
+
+std::string trim(std::string_view s) {
+  const auto b = s.find_first_not_of(" \t");
+  if (b == std::string_view::npos) return {};
+  const auto e = s.find_last_not_of(" \t");
+  return std::string(s.substr(b, e - b + 1));
+}
+
+}  // namespace
+
+problem_input problem_from_arguments(const std::vector<std::string>& args) {
+  problem_input in;
+  if (args.empty())
+    throw input_error(
+        with_prefix("no variables: give them as NAME=UNIT (F=N rho=kg/m^3 ...) or with --file PROBLEM.toml"));
+  std::size_t index = 0;
+  for (const std::string& a : args) {
+    ++index;
+    const std::string where = "argument " + std::to_string(index) + " '" + a + "'";
+    const auto eq = a.find('=');
+    if (eq == std::string::npos)
+      throw input_error(
+          with_prefix(where + " is not NAME=UNIT (write, for example, rho=kg/m^3; U=1 for a pure number)"));
+    const std::string name = a.substr(0, eq);
+    const std::string unit = a.substr(eq + 1);
+    if (const auto why = bad_variable_name(name)) throw input_error(with_prefix(where + ": " + *why));
+    if (in.problem.index_of(name))
+      throw input_error(with_prefix(where + ": the variable '" + name + "' is given twice"));
+    try {
+      (void)parse_unit(unit);
+    } catch (const unit_error& e) {
+      std::string m = with_prefix(where + ": unit of '" + name + "': " + std::string(bare_message(e)));
+      if (a.size() <= 200) m += "\n" + caret_block(a, code_points(std::string_view(a).substr(0, eq + 1)) + e.column());
+      throw input_error(m);
+    }
+    in.problem.add(name, unit);
+    in.report.notes.emplace_back();
+  }
+  return in;
+}
+
+problem_input problem_from_file(const std::string& path) {
+  problem_input in;
+  in.file = load_problem_file(path);
+  const problem_file& f = *in.file;
+  for (const file_variable& v : f.variables) {
+    try {
+      (void)parse_unit(v.unit);
+    } catch (const unit_error& e) {
+      bad_file_unit(f, v, e);
+    }
+    in.problem.add(v.name, v.unit);
+    in.report.notes.push_back(v.note);
+  }
+  in.report.title = f.title;
+  in.options.dependent = f.dependent;
+  in.dependent_source = f.at(f.dependent_where) + "'dependent'";
+  in.options.repeating = f.repeating;
+  in.repeating_source = f.at(f.repeating_where) + "'repeating'";
+  return in;
+}
+
+void override_dependent(problem_input& in, const std::string& name) {
+  in.options.dependent = trim(name);
+  in.dependent_source = "--dependent";
+  if (in.options.dependent.empty()) throw input_error(with_prefix("--dependent: the name is empty"));
+}
+
+void override_repeating(problem_input& in, const std::string& list) {
+  in.options.repeating.clear();
+  in.repeating_source = "--repeating";
+  std::size_t start = 0;
+  while (true) {
+    const std::size_t comma = list.find(',', start);
+    const std::string item =
+        trim(std::string_view(list).substr(start, comma == std::string::npos ? std::string::npos : comma - start));
+    if (item.empty())
+      throw input_error(
+          with_prefix("--repeating '" + list + "': an empty name in the list (write --repeating rho,U,D)"));
+    in.options.repeating.push_back(item);
+    if (comma == std::string::npos) break;
+    start = comma + 1;
+  }
+}
+
+nondim::analysis analyze_input(const problem_input& in) {
+  try {
+    return analyze(in.problem, in.options);
+  } catch (const analysis_error& e) {
+    const std::string& v = e.variable();
+    std::string where;
+    if (!v.empty() && v == in.options.dependent && !in.problem.index_of(v)) {
+      where = in.dependent_source + ": ";
+    } else if (!in.options.repeating.empty() &&
+               (v.empty() ||
+                std::find(in.options.repeating.begin(), in.options.repeating.end(), v) != in.options.repeating.end())) {
+      where = in.repeating_source + ": ";
+    } else if (in.file) {
+      where = in.file->path + ": ";
+    }
+    throw input_error(with_prefix(where + std::string(bare_message(e))));
+  }
+}
+
+}  // namespace nondim::tool
