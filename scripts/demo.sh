@@ -1,8 +1,9 @@
 #!/bin/sh
-# Build nondim and run its demo: the README's first quick-start command.
+# Build the nondim program and run its demo (the README's first quick-start command).
+# Extra arguments go to `nondim demo` (e.g. --format markdown).
 set -eu
 cd "$(dirname "$0")/.."
 scripts/install-deps.sh
 cmake --preset release >/dev/null
-cmake --build --preset release --target solver_inputs >/dev/null
-exec ./build/release/examples/solver_inputs "$@"
+cmake --build --preset release --target nondim_cli >/dev/null
+exec ./build/release/tools/nondim/nondim demo "$@"

@@ -69,7 +69,7 @@ inline Eigen::VectorXd solve_lexicographic(const std::vector<std::vector<std::in
   if (!a_p.empty()) {
     const Eigen::MatrixXd ap = to_matrix(a_p, unknowns);
     s0 = ap.completeOrthogonalDecomposition().solve(b_p);
-    const auto null = null_basis(reduce(a_p, unknowns));
+    const auto null = null_basis(similarity_reduce(a_p, unknowns));
     if (null.empty()) {
       basis.resize(f, 0);
     } else {
@@ -164,7 +164,7 @@ inline similarity_plan plan_similarity(const similarity_problem& p) {
   {
     auto rows = detail::unknown_rows(p, independent, unknown);
     for (auto& r : rows) std::reverse(r.begin(), r.end());
-    const detail::echelon e = detail::reduce(rows, f);
+    const detail::similarity_echelon e = detail::similarity_reduce(rows, f);
     plan.rank = e.rank();
     const auto det = detail::determined_columns(e);
     for (std::size_t u = 0; u < f; ++u) {

@@ -14,7 +14,7 @@ namespace nondim::detail {
 using exact_q = boost::multiprecision::cpp_rational;
 
 /// Reduced row echelon form: `rows[i]` has 1 at `pivots[i]` and 0 in every other pivot column.
-struct echelon {
+struct similarity_echelon {
   std::size_t cols = 0;
   std::vector<std::size_t> pivots;  ///< increasing
   std::vector<std::vector<exact_q>> rows;
@@ -28,7 +28,7 @@ struct echelon {
 };
 
 /// \brief RREF of `m` (each row `cols` long).
-inline echelon reduce(const std::vector<std::vector<std::int64_t>>& m, std::size_t cols) {
+inline similarity_echelon similarity_reduce(const std::vector<std::vector<std::int64_t>>& m, std::size_t cols) {
   std::vector<std::vector<exact_q>> a;
   a.reserve(m.size());
   for (const auto& row : m) {
@@ -37,7 +37,7 @@ inline echelon reduce(const std::vector<std::vector<std::int64_t>>& m, std::size
     for (std::size_t c = 0; c < cols; ++c) r.emplace_back(c < row.size() ? row[c] : 0);
     a.push_back(std::move(r));
   }
-  echelon e;
+  similarity_echelon e;
   e.cols = cols;
   std::size_t next = 0;  // first row not yet holding a pivot
   for (std::size_t c = 0; c < cols && next < a.size(); ++c) {
@@ -61,7 +61,7 @@ inline echelon reduce(const std::vector<std::vector<std::int64_t>>& m, std::size
 }
 
 /// \brief A basis of the null space: one vector per non-pivot column q, with 1 at q.
-inline std::vector<std::vector<exact_q>> null_basis(const echelon& e) {
+inline std::vector<std::vector<exact_q>> null_basis(const similarity_echelon& e) {
   std::vector<std::vector<exact_q>> basis;
   for (std::size_t q = 0; q < e.cols; ++q) {
     if (e.is_pivot(q)) continue;
@@ -75,7 +75,7 @@ inline std::vector<std::vector<exact_q>> null_basis(const echelon& e) {
 
 /// \brief Whether each unknown is fixed by the rows: true when every null vector is 0
 /// there (a pivot whose reduced row is 0 in every non-pivot column).
-inline std::vector<bool> determined_columns(const echelon& e) {
+inline std::vector<bool> determined_columns(const similarity_echelon& e) {
   std::vector<bool> d(e.cols, false);
   for (std::size_t i = 0; i < e.rank(); ++i) {
     bool alone = true;

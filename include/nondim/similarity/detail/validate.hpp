@@ -132,7 +132,7 @@ inline void check_groups(const similarity_problem& p) {
   std::vector<std::vector<std::int64_t>> rows;
   for (std::size_t k = 0; k < p.groups.size(); ++k) {
     rows.push_back(p.groups[k].exponents);
-    if (reduce(rows, n).rank() < rows.size())
+    if (similarity_reduce(rows, n).rank() < rows.size())
       throw similarity_error(cat("nondim: ", describe_group(p, k),
                                  " is a product of powers of the groups before it: the groups must be independent"),
                              {}, k);
