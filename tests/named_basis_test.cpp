@@ -513,8 +513,12 @@ TEST_SUITE("named basis") {
       std::vector<dimension> ds;
       for (std::size_t i = 0; i < n; ++i) {
         const auto& k = quantity_kinds[pick(rng)];
-        names.push_back(std::string(k.names.substr(0, k.names.find(' '))) +
-                        (i % 3 == 0 ? "" : "_" + std::to_string(i)));
+        std::string name(k.names.substr(0, k.names.find(' ')));  // appended: GCC 12 -Wrestrict false positive
+        if (i % 3 != 0) {
+          name.push_back('_');
+          name.append(std::to_string(i));
+        }
+        names.push_back(name);
         ds.push_back(k.dim);
       }
       std::vector<group_variable> v;
@@ -523,7 +527,9 @@ TEST_SUITE("named basis") {
       for (std::size_t i = 0; i < n; ++i)
         for (std::size_t j = 0; j < i; ++j)
           if (names[i] == names[j]) {
-            names[i] += "_" + std::to_string(i) + "x";
+            names[i].push_back('_');
+            names[i].append(std::to_string(i));
+            names[i].push_back('x');
             v[i].name = names[i];
           }
       // repeating variables: those (other than the dependent, variable 0) that raise the rank
