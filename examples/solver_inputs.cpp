@@ -4,7 +4,10 @@
 // through a rectangular cooling channel between cell rows; the code computes the channel's
 // Reynolds and Prandtl numbers, a Dittus–Boelter-form Nusselt number and the heat the air
 // removes. Every input carries its dimension in its type: passing a dynamic viscosity where
-// a kinematic one is meant, or adding a length to a time, does not compile.
+// a kinematic one is meant, or adding a length to a time, does not compile. Re and Pr come
+// from `pi_groups`: the exponents are worked out by the compiler from the argument types,
+// so the run-time cost is the hand-written products and a wrong exponent cannot happen.
+#include <nondim/analysis/pi_groups.hpp>
 #include <nondim/quantity.hpp>
 
 #include <cmath>
@@ -33,12 +36,14 @@ constexpr quantity<dims::length> hydraulic_diameter(const channel& c) {
 }
 
 // The typed signature is the unit check: only a velocity, a length and the fluid fit here.
+// pi_groups(rho, u, d, mu): rho first, so the one group is rho u d / mu = Re (not 1/Re).
 constexpr double reynolds(quantity<dims::velocity> u, quantity<dims::length> d, const air_properties& air) {
-  return air.rho * u * d / air.mu;
+  return pi_groups(air.rho, u, d, air.mu)[0];
 }
 
+// pi_groups(cp, mu, k): cp mu / k = Pr; four base dimensions, rank 2, one group.
 constexpr double prandtl(const air_properties& air) {
-  return air.mu * air.cp / air.k;
+  return pi_groups(air.cp, air.mu, air.k)[0];
 }
 
 }  // namespace
@@ -55,6 +60,11 @@ int main() {
   constexpr double re = reynolds(inlet_speed, d_h, air);
   constexpr double pr = prandtl(air);
   static_assert(pr > 0.6 && pr < 0.8, "air has a Prandtl number near 0.7");
+  // The compile-time basis is the textbook one (Incropera et al., ch. 6, from memory):
+  // Re = rho u D_h / mu and Pr = mu cp / k, to the rounding of the products.
+  static_assert(re / (air.rho * inlet_speed * d_h / air.mu) - 1.0 < 1e-15 &&
+                re / (air.rho * inlet_speed * d_h / air.mu) - 1.0 > -1e-15);
+  static_assert(pr / (air.mu * air.cp / air.k) - 1.0 < 1e-15 && pr / (air.mu * air.cp / air.k) - 1.0 > -1e-15);
 
   // Dittus–Boelter form, Nu = 0.023 Re^0.8 Pr^0.4 (Incropera et al., Fundamentals of Heat
   // and Mass Transfer, eq. 8.60, from memory). Valid for Re > 10^4: the demo says so when not.

@@ -74,13 +74,15 @@ TEST_SUITE("analysis text") {
     CHECK(contains(u, "  T  -2   0  -1  0  -1\n"));
     CHECK(contains(u, "rank 3\n"));
     CHECK(contains(u, "repeating \u03c1, U, D (given)\n"));
-    CHECK(contains(u, "\u03c01 = F\u00b7\u03c1\u207b\u00b9\u00b7U\u207b\u00b2\u00b7D\u207b\u00b2\n"));
+    // F/(rho U^2 D^2) is a drag coefficient (White, Fluid Mechanics, ch. 5, from memory)
+    CHECK(contains(u, "\u03c01 = F\u00b7\u03c1\u207b\u00b9\u00b7U\u207b\u00b2\u00b7D\u207b\u00b2 = C_D (drag coefficient)\n"));
     CHECK(contains(u, "isolated: none\n"));
     CHECK(contains(u, "SVD check: rank 3, agrees"));
 
     const std::string s = to_string(a, text_form::ascii);
     CHECK(pure_ascii(s));
-    CHECK(contains(s, "pi2 = mu*rho^-1*U^-1*D^-1\n"));
+    // mu/(rho U D) = 1/Re (White, Fluid Mechanics, ch. 5, from memory)
+    CHECK(contains(s, "pi2 = mu*rho^-1*U^-1*D^-1 = Re^-1 (Reynolds number)\n"));
     std::ostringstream os;
     os << a;
     CHECK(os.str() == u);

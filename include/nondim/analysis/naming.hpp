@@ -39,8 +39,14 @@ inline void attach_matches(analysis& a, std::span<const std::size_t> chosen = {}
   const group_recognizer recognise(vars);
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     std::vector<catalog_match> ms = recognise(a.groups[k].exponents);
-    if (k < chosen.size() && chosen[k] < catalog_size)
-      std::stable_partition(ms.begin(), ms.end(), [&](const catalog_match& m) { return m.entry == chosen[k]; });
+    const std::size_t named_as = k < chosen.size() ? chosen[k] : catalog_size;
+    // A match that a variable's conventional name contradicts (L/D read as a Knudsen
+    // number, L being no mean free path) is noise to a reader: only consistent ones stay,
+    // and the entry the named basis chose.
+    std::erase_if(ms, [&](const catalog_match& m) { return !m.consistent && m.entry != named_as; });
+    for (auto& m : ms) m.ambiguous = ms.size() > 1;
+    if (named_as < catalog_size)
+      std::stable_partition(ms.begin(), ms.end(), [&](const catalog_match& m) { return m.entry == named_as; });
     a.groups[k].matches = to_group_matches(ms);
   }
 }

@@ -55,7 +55,8 @@ struct pi_group {
   std::vector<std::string> variables;   ///< the problem's variable names, aligned with `exponents`
   std::size_t non_repeating = 0;        ///< index of the group's non-repeating variable (written first)
   /// Catalog entries the group matches, best first (see recognize.hpp); filled by analyze()
-  /// in both bases.
+  /// in both bases. Matches that a variable's conventional name contradicts are left out
+  /// (`L/D` is no Knudsen number when `L` is a length); `recognize()` lists them all.
   std::vector<group_match> matches;
 
   /// \brief The exponent of `variable`; 0 where absent (not in the group, or not in the problem).

@@ -31,6 +31,23 @@ inline std::string short_double(double v) {
   return buf;
 }
 
+/// " = Re⁻¹ (Reynolds number)" for the best match; other entries of the same form follow
+/// as "; same form: C_L (lift coefficient)", not chained with "=": Nu and Bi share a form
+/// but are not equal.
+inline std::string names_suffix(const pi_group& g, text_form form) {
+  std::string s;
+  for (std::size_t k = 0; k < g.matches.size(); ++k) {
+    const auto& m = g.matches[k];
+    s.append(k == 0 ? " = " : k == 1 ? "; same form: " : ", ")
+        .append(m.symbol)
+        .append(exponent_suffix(m.power, form))
+        .append(" (")
+        .append(m.name)
+        .append(")");
+  }
+  return s;
+}
+
 }  // namespace detail
 
 /// \brief The analysis as text, e.g. (Unicode)
@@ -45,8 +62,8 @@ inline std::string short_double(double v) {
 /// dependent F
 /// repeating ρ, U, D (chosen automatically)
 /// groups (2)
-///   π1 = F·ρ⁻¹·U⁻²·D⁻²
-///   π2 = μ·ρ⁻¹·U⁻¹·D⁻¹
+///   π1 = F·ρ⁻¹·U⁻²·D⁻² = C_D (drag coefficient)
+///   π2 = μ·ρ⁻¹·U⁻¹·D⁻¹ = Re⁻¹ (Reynolds number)
 /// isolated: none
 /// SVD check: rank 3, agrees; singular values ...; max residual 0
 /// ```
@@ -91,7 +108,7 @@ inline std::string to_string(const analysis& a, text_form form = text_form::unic
 
   s.append(cat({"groups (", std::to_string(a.groups.size()), ")\n"}));
   for (std::size_t k = 0; k < a.groups.size(); ++k)
-    s.append(cat({"  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form), "\n"}));
+    s.append(cat({"  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form), detail::names_suffix(a.groups[k], form), "\n"}));
 
   if (a.isolated.empty()) {
     s.append("isolated: none\n");

@@ -74,6 +74,19 @@ inline std::string latex_power(const std::string& base, const rational& e) {
   return (subscripted ? "{" + base + "}" : base) + "^{" + to_string(e) + "}";
 }
 
+/// A catalog symbol in LaTeX math: `Re` -> `\mathrm{Re}`, `C_D` -> `C_{\mathrm{D}}`
+/// (descriptive subscripts upright, ISO 80000-2), `eps/D` -> `\varepsilon/D`.
+inline std::string latex_symbol(std::string_view symbol) {
+  if (const auto slash = symbol.find('/'); slash != std::string_view::npos)
+    return latex_symbol(symbol.substr(0, slash)) + "/" + latex_symbol(symbol.substr(slash + 1));
+  const auto underscore = symbol.find('_');
+  const std::string_view head = symbol.substr(0, underscore);
+  std::string s = head == "eps" || head.size() == 1 ? latex_word(head) : "\\mathrm{" + latex_upright(head) + "}";
+  if (underscore != std::string_view::npos)
+    s += "_{\\mathrm{" + latex_upright(symbol.substr(underscore + 1)) + "}}";
+  return s;
+}
+
 }  // namespace detail
 
 /// \brief `name` in LaTeX math: a head, then trailing digits or the part after the first
@@ -117,13 +130,16 @@ inline std::string latex_report(const analysis& a, const report_options& o = {})
        std::to_string(a.rank) + "; repeating: " + detail::comma_list(a.repeating) + "\n";
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     s += "\\[ \\Pi_{" + std::to_string(k + 1) + "} = " + latex(a.groups[k]);
-    for (const auto& m : detail::matches_of(a.groups[k]))
-      s += " = " + detail::latex_power("\\mathrm{" + detail::latex_upright(m.symbol) + "}", m.power);
-    s += " \\]";
+    // Only the best match goes into the equation: two entries that share a form (Nu and
+    // Bi) are not equal to each other, so chaining them would state a falsehood.
     const auto names = detail::matches_of(a.groups[k]);
+    if (!names.empty()) s += " = " + detail::latex_power(detail::latex_symbol(names[0].symbol), names[0].power);
+    s += " \\]";
     if (!names.empty()) {
-      s += "  % ";
-      for (std::size_t m = 0; m < names.size(); ++m) s += (m ? "; " : "") + detail::one_line(names[m].name);
+      s += "  % " + detail::one_line(names[0].name);
+      for (std::size_t m = 1; m < names.size(); ++m)
+        s += (m == 1 ? "; the same form: " : ", ") + detail::one_line(names[m].name) + " (" +
+             detail::one_line(names[m].symbol) + ")";
     }
     s += "\n";
   }

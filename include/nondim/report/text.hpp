@@ -18,18 +18,6 @@ namespace nondim {
 
 namespace detail {
 
-/// " = Re⁻¹ (Reynolds number)" for each recognised name.
-inline std::string names_suffix(const pi_group& g, text_form form) {
-  std::string s;
-  bool ambiguous = false;
-  for (const auto& m : matches_of(g)) {
-    s += " = " + m.symbol + exponent_suffix(m.power, form) + " (" + m.name + ")";
-    ambiguous = ambiguous || m.ambiguous;
-  }
-  if (ambiguous) s += " [ambiguous: the variables fit more than one named group]";
-  return s;
-}
-
 /// "SVD check: rank 3, agrees with the exact rank; singular values 3.74, 2.8, 0.369 (2 more
 /// below the tolerance 1.7e-15); max residual 0". Values below the tolerance are rounding
 /// noise and are only counted.
