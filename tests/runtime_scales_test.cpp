@@ -238,6 +238,12 @@ TEST_SUITE("runtime_scales") {
     CHECK(theta[0] == 0.0);
     CHECK(theta[1] == doctest::Approx(0.25).epsilon(1e-13));
     CHECK(theta[2] == 1.0);
+    std::vector<double> back(theta.size());
+    s.dimensional_point(theta, 25.0, "degC", back);
+    for (std::size_t c = 0; c < back.size(); ++c) {
+      CHECK(back[c] == s.dimensional_point(theta[c], 25.0, "degC"));
+      CHECK(back[c] == doctest::Approx(readings[c]).epsilon(1e-13));
+    }
     // a temperature difference scales by dT; in a compound unit degC is an interval (DESIGN.md)
     CHECK(s.nondimensional(5.0, "K") == 0.25);
     CHECK(s.nondimensional(5.0, "(degC)") == 0.25);

@@ -427,6 +427,16 @@ class runtime_scales {
     const parsed_unit u = temperature_unit(unit_text);
     return ((t_ref * u.factor + u.offset) + theta * temperature_scale() - u.offset) / u.factor;
   }
+  /// \brief A field: `out[c]` is the reading of T_ref + theta[c] dT in unit `unit_text`;
+  /// `out` may be `theta` itself. Each cell as `dimensional_point(theta[c], t_ref, unit_text)`.
+  void dimensional_point(std::span<const double> theta, double t_ref, std::string_view unit_text,
+                         std::span<double> out) const {
+    check_sizes(theta.size(), out.size());
+    const parsed_unit u = temperature_unit(unit_text);
+    const double dt = temperature_scale();
+    const double ref = t_ref * u.factor + u.offset;
+    for (std::size_t c = 0; c < out.size(); ++c) out[c] = (ref + theta[c] * dt - u.offset) / u.factor;
+  }
   /// \brief T_ref + theta dT as an absolute temperature.
   template <class Rep>
   [[nodiscard]] temperature_point<Rep> dimensional_point(double theta, const temperature_point<Rep>& t_ref) const {
