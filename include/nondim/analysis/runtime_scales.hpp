@@ -19,6 +19,10 @@
 /// over those of the negative ones; integer powers by repeated squaring; square and cube
 /// roots taken once per reference), so both give the same double for the same references.
 ///
+/// Cost: each call solves the exponents of its dimension (a 7 x (k + 1) elimination) and,
+/// given unit text, parses it; a field call does that once for all its cells. In a loop over
+/// single values keep `scale(d).value` instead.
+///
 /// Temperatures: a nondimensional temperature is built from differences,
 /// theta = (T - T_ref) / dT, by `nondimensional_difference`. An absolute temperature (unit
 /// text `degC` or `degF` standing alone, which `parse_unit` marks affine with its offset)
