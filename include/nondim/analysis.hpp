@@ -1,8 +1,8 @@
 #pragma once
 /// \file analysis.hpp
 /// \brief The analysis layer: named variables, the exact dimensionless groups, their
-/// evaluation and text forms, the SVD cross-check, the catalog of characteristic numbers
-/// and the named basis. Needs Boost.Multiprecision and Eigen.
+/// evaluation and text forms, the SVD cross-check, reference scales (compile time and run
+/// time), the catalog of characteristic numbers and the named basis. Needs Boost.Multiprecision and Eigen.
 
 #include "parse.hpp"
 #include "quantity.hpp"
@@ -21,6 +21,7 @@
 #include "analysis/quantity_kind.hpp"
 #include "analysis/recognize.hpp"
 #include "analysis/result.hpp"
+#include "analysis/runtime_scales.hpp"
 #include "analysis/svd_check.hpp"
 #include "analysis/symbols.hpp"
 #include "analysis/text.hpp"

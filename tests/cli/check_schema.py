@@ -71,7 +71,7 @@ def keys(obj, where, required, optional, problems):
 
 
 def check_groups(v, problems):
-    if not keys(v, "root", ["variables", "rank", "repeating", "groups", "svd_check"], [], problems):
+    if not keys(v, "root", ["variables", "rank", "repeating", "groups", "svd_check"], ["scales"], problems):
         return
     names, dims = [], {}
     for i, var in enumerate(v["variables"]):
@@ -141,6 +141,45 @@ def check_groups(v, problems):
             problems.append("svd_check.singular_values: must be non-negative numbers, descending")
         if not is_number(s["max_residual"]) or s["max_residual"] < 0:
             problems.append("svd_check.max_residual: must be a non-negative number")
+    if "scales" in v:
+        check_scales(v["scales"], names, dims, rep if isinstance(rep, list) else [], problems)
+
+
+def check_scales(scales, names, dims, rep, problems):
+    """`groups --scales`: one entry per variable, in order; the exponents on the repeating
+    variables must give the variable's dimension (exact fractions)."""
+    if not isinstance(scales, list) or [s.get("name") if isinstance(s, dict) else None for s in scales] != names:
+        problems.append("scales: must list every variable, in order")
+        return
+    for i, s in enumerate(scales):
+        w = "scales[%d]" % i
+        if not keys(s, w, ["name", "reference", "nondimensional", "scale", "exponents"], ["lacking"], problems):
+            continue
+        if s["reference"] is not (s["name"] in rep):
+            problems.append("%s.reference must say whether %r is a repeating variable" % (w, s["name"]))
+        if s["exponents"] is None:
+            if s["scale"] is not None or s["nondimensional"] is not None:
+                problems.append("%s: without exponents, scale and nondimensional must be null" % w)
+            if "lacking" in s and s["lacking"] not in BASES:
+                problems.append("%s.lacking: %r is not a base dimension" % (w, s["lacking"]))
+            continue
+        if not isinstance(s["scale"], str) or not isinstance(s["nondimensional"], str) or "lacking" in s:
+            problems.append("%s: scale and nondimensional must be strings, and no 'lacking'" % w)
+        if not isinstance(s["exponents"], dict):
+            problems.append("%s.exponents: not an object" % w)
+            continue
+        total = {b: Fraction(0) for b in BASES}
+        for name, e in s["exponents"].items():
+            if name not in rep:
+                problems.append("%s: %r is not a repeating variable" % (w, name))
+                continue
+            f = exponent(e, "%s.exponents.%s" % (w, name), problems)
+            for b, x in dims[name].items():
+                total[b] += (f or Fraction(0)) * x
+        want = {b: dims[s["name"]].get(b, Fraction(0)) for b in BASES}
+        if total != want:
+            problems.append("%s: the scale has dimension %s, not that of %r" %
+                            (w, {b: str(x) for b, x in total.items() if x}, s["name"]))
 
 
 def check_dim(v, problems):

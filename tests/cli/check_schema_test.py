@@ -49,7 +49,35 @@ cases = {
     "unknown base": broken(lambda v: v["variables"][3]["dimension"].update(X=1)),
 }
 
+# with `groups --scales`: p* = F/(rho U^2 D^2) and mu/(rho U D), as the groups above
+scaled = copy.deepcopy(good)
+scaled["scales"] = [
+    {"name": "F", "reference": False, "nondimensional": "", "scale": "", "exponents": {"rho": 1, "U": 2, "D": 2}},
+    {"name": "rho", "reference": True, "nondimensional": "", "scale": "", "exponents": {"rho": 1}},
+    {"name": "U", "reference": True, "nondimensional": "", "scale": "", "exponents": {"U": 1}},
+    {"name": "D", "reference": True, "nondimensional": "", "scale": "", "exponents": {"D": 1}},
+    {"name": "mu", "reference": False, "nondimensional": "", "scale": "", "exponents": {"rho": 1, "U": 1, "D": 1}},
+]
+
+
+def broken_scales(edit):
+    v = copy.deepcopy(scaled)
+    edit(v)
+    return v
+
+
+cases.update({
+    "scale of the wrong dimension": broken_scales(lambda v: v["scales"][0]["exponents"].update(U=1)),
+    "scale on a non-repeating variable": broken_scales(lambda v: v["scales"][4]["exponents"].update(mu=1)),
+    "scales out of order": broken_scales(lambda v: v["scales"].reverse()),
+    "reference flag wrong": broken_scales(lambda v: v["scales"][0].update(reference=True)),
+    "scale missing key": broken_scales(lambda v: v["scales"][1].pop("scale")),
+})
+
 failures = 0
+if check_schema.check("groups", scaled):
+    print("FAIL: the valid object with scales is rejected:", check_schema.check("groups", scaled))
+    failures += 1
 if check_schema.check("groups", good):
     print("FAIL: the valid object is rejected:", check_schema.check("groups", good))
     failures += 1

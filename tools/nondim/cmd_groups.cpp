@@ -1,6 +1,7 @@
 /// \file cmd_groups.cpp
 /// \brief `nondim groups`: the dimensionless groups of a problem given as NAME=UNIT
-/// arguments or in a problem file, as text, Markdown, LaTeX or JSON.
+/// arguments or in a problem file, as text, Markdown, LaTeX or JSON; with `--scales`, the
+/// reference scale of every variable in the repeating variables as well.
 
 #include <memory>
 #include <ostream>
@@ -24,6 +25,7 @@ struct groups_args {
   std::string dependent;
   std::string basis;
   std::string format = "text";
+  bool scales = false;
 };
 }  // namespace
 
@@ -45,11 +47,15 @@ subcommand add_groups(CLI::App& app) {
   sub->add_option("--format", args->format, "Output format")
       ->check(CLI::IsMember({"text", "markdown", "latex", "json"}))
       ->default_str("text");
+  sub->add_flag("-s,--scales", args->scales,
+                "Also print the reference scale of every variable in the repeating variables, the form a "
+                "nondimensional solver divides it by (t* = t·U/D)");
   sub->footer(
       "Options given on the command line override those in the file.\n"
       "Examples:\n"
       "  nondim groups F=N rho=kg/m^3 U=m/s D=m mu=Pa*s\n"
-      "  nondim groups --file pod.toml --repeating rho,U,D --format latex");
+      "  nondim groups --file pod.toml --repeating rho,U,D --format latex\n"
+      "  nondim groups --file pod.toml --scales");
   return {
       sub, [args](std::ostream& out) {
         if (!args->file.empty() && !args->variables.empty())
@@ -59,14 +65,18 @@ subcommand add_groups(CLI::App& app) {
         if (!args->repeating.empty()) override_repeating(in, args->repeating);
         if (!args->basis.empty()) in.options.form = args->basis == "named" ? basis::named : basis::classical;
         const analysis a = analyze_input(in);
+        if (args->scales && args->format == "latex")
+          throw input_error(with_prefix("--scales is available with --format text, markdown or json, not latex"));
         if (args->format == "json") {
-          out << json_report(a);
+          out << (args->scales ? json_scales_report(a) : json_report(a));
         } else if (args->format == "markdown") {
           out << markdown_report(a, in.report);
+          if (args->scales) out << "\n" << scales_markdown_report(a);
         } else if (args->format == "latex") {
           out << latex_report(a, in.report);
         } else {
           out << text_report(a, in.report);
+          if (args->scales) out << "\n" << scales_text_report(a);
         }
       }};
 }

@@ -54,36 +54,44 @@ inline json_value json_group(const pi_group& g) {
 
 }  // namespace detail
 
+namespace detail {
+
+/// The members of the `json_report` object, in order.
+inline json_members json_report_members(const analysis& a) {
+  json_elements variables;
+  for (const auto& v : a.variables)
+    variables.emplace_back(json_members{{"name", v.name}, {"unit", v.unit}, {"dimension", json_dimension(v.dim)}});
+  json_elements repeating;
+  for (const auto& r : a.repeating) repeating.emplace_back(r);
+  json_elements groups;
+  for (const auto& g : a.groups) groups.push_back(json_group(g));
+  json_elements singular;
+  for (const double v : a.svd.singular_values) singular.emplace_back(v);
+  return json_members{{"variables", std::move(variables)},
+                      {"rank", a.rank},
+                      {"repeating", std::move(repeating)},
+                      {"groups", std::move(groups)},
+                      {"svd_check", json_members{{"rank", a.svd.rank},
+                                                 {"agrees", a.svd.agrees},
+                                                 {"singular_values", std::move(singular)},
+                                                 {"max_residual", a.svd.max_residual}}}};
+}
+
+inline std::string json_text(const json_value& root) {
+  std::string out;
+  write_json_pretty(out, root, 0, 0);
+  out.push_back('\n');
+  return out;
+}
+
+}  // namespace detail
+
 /// \brief The analysis as one JSON object:
 /// `{"variables": [{"name", "unit", "dimension"}], "rank", "repeating", "groups": [{"exponents",
 /// "text", "latex", "matches": [{"name", "symbol", "power"}]}], "svd_check": {"rank", "agrees",
 /// "singular_values", "max_residual"}}`, indented, ending in a newline.
 inline std::string json_report(const analysis& a) {
-  using detail::json_elements;
-  using detail::json_members;
-  using detail::json_value;
-  json_elements variables;
-  for (const auto& v : a.variables)
-    variables.emplace_back(
-        json_members{{"name", v.name}, {"unit", v.unit}, {"dimension", detail::json_dimension(v.dim)}});
-  json_elements repeating;
-  for (const auto& r : a.repeating) repeating.emplace_back(r);
-  json_elements groups;
-  for (const auto& g : a.groups) groups.push_back(detail::json_group(g));
-  json_elements singular;
-  for (const double v : a.svd.singular_values) singular.emplace_back(v);
-  const json_value root = json_members{{"variables", std::move(variables)},
-                                       {"rank", a.rank},
-                                       {"repeating", std::move(repeating)},
-                                       {"groups", std::move(groups)},
-                                       {"svd_check", json_members{{"rank", a.svd.rank},
-                                                                  {"agrees", a.svd.agrees},
-                                                                  {"singular_values", std::move(singular)},
-                                                                  {"max_residual", a.svd.max_residual}}}};
-  std::string out;
-  detail::write_json_pretty(out, root, 0, 0);
-  out.push_back('\n');
-  return out;
+  return detail::json_text(detail::json_report_members(a));
 }
 
 }  // namespace nondim
