@@ -25,10 +25,10 @@ int main() {
   options named;
   named.form = basis::named;
   const analysis practitioner = analyze(p, named);
+  std::cout << "named basis\n";
   for (const pi_group& g : practitioner.groups) {
-    std::cout << g.text() << "   ";
-    for (const auto& m : g.matches)
-      std::cout << m.symbol << (m.power == rational{1} ? "" : "^" + to_string(m.power)) << ' ';
+    std::cout << "  " << g.text();
+    if (!g.matches.empty()) std::cout << " = " << g.matches.front().symbol << " (" << g.matches.front().name << ")";
     std::cout << '\n';
   }
   return 0;

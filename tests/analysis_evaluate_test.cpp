@@ -28,6 +28,17 @@ std::atomic<std::size_t> allocations{0};
 [[gnu::noinline]] void operator delete(void* p, std::size_t) noexcept {
   std::free(p);
 }
+// The array forms too, so that every allocation and its release pair malloc with free
+// (AddressSanitizer reports a sanitizer's new[] released by this free as a mismatch).
+[[gnu::noinline]] void* operator new[](std::size_t size) {
+  return ::operator new(size);
+}
+[[gnu::noinline]] void operator delete[](void* p) noexcept {
+  ::operator delete(p);
+}
+[[gnu::noinline]] void operator delete[](void* p, std::size_t) noexcept {
+  ::operator delete(p);
+}
 
 using namespace nondim;
 

@@ -168,8 +168,11 @@ inline constexpr std::array table{
                   "Sr",
                   momentum_transfer,
                   1,
-                  {catalog_form{"Sr = fL/U", {{frequency, 1}, {characteristic_length, 1}, {velocity, -1}}}},
-                  "ISO 80000-11:2019 (Sr = lf/v, from memory); White, Fluid Mechanics, ch. 5 (from memory)",
+                  {catalog_form{"Sr = fL/U", {{frequency, 1}, {characteristic_length, 1}, {velocity, -1}}},
+                   catalog_form{"Sr = L/(U t) (t a period, 1/f, or the reference time of an unsteady flow)",
+                                {{characteristic_length, 1}, {velocity, -1}, {time, -1}}}},
+                  "ISO 80000-11:2019 (Sr = lf/v, from memory); White, Fluid Mechanics, ch. 5 (from memory); "
+                  "White, Viscous Fluid Flow, ch. 2: the coefficient L/(U t) of the unsteady term (from memory)",
                   "written St in many handbooks; ISO writes Sr to keep St for Stanton"},
     catalog_entry{"Knudsen number",
                   "Kn",

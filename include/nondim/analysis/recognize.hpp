@@ -15,9 +15,9 @@
 ///  - a kind hint equal to the factor's kind scores 4, a hint more specific than it 3, a
 ///    more general hint 0; a hint of another kind of the same dimension is a contradiction;
 ///  - without a hint, a name listed for the factor's kind ("k_s" for the conductivity of a
-///    solid) scores 2, a name listed for a more specific kind 1; a name listed only for
-///    other kinds of the same dimension ("k_s" where the fluid's conductivity is meant) is a
-///    contradiction. Failing an exact listing, the part of the name before its first `_`
+///    solid) scores 2, a name listed for a more specific kind 1, for a more general kind 0
+///    ("k" for the conductivity of a solid); a name listed only for other kinds of the same
+///    dimension ("k_s" where the fluid's conductivity is meant) is a contradiction. Failing an exact listing, the part of the name before its first `_`
 ///    is tried the same way with score 1 ("rho_l" is a density);
 ///  - a match is `consistent` when no variable contradicts its factor.
 /// Matches are ordered consistent first, then by score, tier and catalog order.
@@ -200,6 +200,18 @@ constexpr std::array<std::uint64_t, quantity_kind_count> make_specific_masks() {
 }
 inline constexpr auto specific_masks = make_specific_masks();
 
+/// For each kind, the mask of every more general kind (a thermal conductivity for the
+/// conductivity of a solid): a name of a general kind fits a specific role, uninformatively.
+constexpr std::array<std::uint64_t, quantity_kind_count> make_general_masks() {
+  std::array<std::uint64_t, quantity_kind_count> out{};
+  for (std::size_t s = 0; s < quantity_kind_count; ++s)
+    for (std::size_t g = 1; g < quantity_kind_count; ++g)
+      if (g != s && is_same_or_general(static_cast<quantity_kind>(g), static_cast<quantity_kind>(s)))
+        out[s] |= kind_bit(static_cast<quantity_kind>(g));
+  return out;
+}
+inline constexpr auto general_masks = make_general_masks();
+
 /// What the name of a variable says about its kind (only kinds of its own dimension).
 struct name_profile {
   std::uint64_t exact = 0;  ///< kinds whose conventional names include the name
@@ -264,15 +276,16 @@ inline int pair_score(const group_variable& v, const name_profile& p, quantity_k
   }
   const std::uint64_t bit = kind_bit(role);
   const std::uint64_t specific = specific_masks[static_cast<std::size_t>(role)];
+  const std::uint64_t general = general_masks[static_cast<std::size_t>(role)];
   if (p.exact != 0) {
     if ((p.exact & bit) != 0) return 2;
     if ((p.exact & specific) != 0) return 1;
-    conflict = true;
+    if ((p.exact & general) == 0) conflict = true;  // "k" fits k_s; "k_f" does not
     return 0;
   }
   if (p.base != 0) {
     if ((p.base & specific) != 0) return 1;
-    conflict = true;
+    if ((p.base & general) == 0) conflict = true;
   }
   return 0;
 }
