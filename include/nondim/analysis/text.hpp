@@ -48,6 +48,26 @@ inline std::string names_suffix(const pi_group& g, text_form form) {
   return s;
 }
 
+/// "SVD check: rank 3, agrees with the exact rank; singular values 3.74, 2.8, 0.369 (2 more
+/// below the tolerance 1.7e-15); max residual 0". Values below the tolerance are rounding
+/// noise and are only counted.
+inline std::string svd_line(const svd_check& c) {
+  std::string s = "SVD check: rank " + std::to_string(c.rank) + (c.agrees ? ", agrees" : ", DISAGREES") +
+                  " with the exact rank; singular values";
+  std::size_t shown = 0;
+  std::size_t below = 0;
+  for (const double v : c.singular_values) {
+    if (v > c.tolerance) {
+      s += (shown++ ? ", " : " ") + short_double(v);
+    } else {
+      ++below;
+    }
+  }
+  if (shown == 0) s += " none above the tolerance";
+  if (below != 0) s += " (" + std::to_string(below) + " more below the tolerance " + short_double(c.tolerance) + ")";
+  return s + "; max residual " + short_double(c.max_residual);
+}
+
 }  // namespace detail
 
 /// \brief The analysis as text, e.g. (Unicode)
@@ -122,11 +142,7 @@ inline std::string to_string(const analysis& a, text_form form = text_form::unic
     }
   }
 
-  s.append(cat({"SVD check: rank ", std::to_string(a.svd.rank), a.svd.agrees ? ", agrees" : ", DISAGREES",
-                "; singular values"}));
-  for (std::size_t k = 0; k < a.svd.singular_values.size(); ++k)
-    s.append(k ? ", " : " ").append(detail::short_double(a.svd.singular_values[k]));
-  s.append(cat({"; max residual ", detail::short_double(a.svd.max_residual), "\n"}));
+  s.append(detail::svd_line(a.svd)).push_back('\n');
   for (const auto& note : a.notes)
     if (note != a.deficiency.explanation) s.append(cat({"note: ", note, "\n"}));
   return s;

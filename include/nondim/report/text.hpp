@@ -16,30 +16,6 @@
 
 namespace nondim {
 
-namespace detail {
-
-/// "SVD check: rank 3, agrees with the exact rank; singular values 3.74, 2.8, 0.369 (2 more
-/// below the tolerance 1.7e-15); max residual 0". Values below the tolerance are rounding
-/// noise and are only counted.
-inline std::string svd_line(const svd_check& c) {
-  std::string s = "SVD check: rank " + std::to_string(c.rank) + (c.agrees ? ", agrees" : ", DISAGREES") +
-                  " with the exact rank; singular values";
-  std::size_t shown = 0;
-  std::size_t below = 0;
-  for (const double v : c.singular_values) {
-    if (v > c.tolerance) {
-      s += (shown++ ? ", " : " ") + six_digits(v);
-    } else {
-      ++below;
-    }
-  }
-  if (shown == 0) s += " none above the tolerance";
-  if (below != 0) s += " (" + std::to_string(below) + " more below the tolerance " + six_digits(c.tolerance) + ")";
-  return s + "; max residual " + six_digits(c.max_residual);
-}
-
-}  // namespace detail
-
 /// \brief The analysis as text; `form` unicode writes ρ, U⁻², Π1 and Θ, ascii writes rho,
 /// U^-2, Pi1 and Theta.
 inline std::string text_report(const analysis& a, const report_options& o = {}, text_form form = text_form::unicode) {
