@@ -14,6 +14,7 @@
 #include <sstream>
 #include <string>
 #include <string_view>
+#include <system_error>
 #include <vector>
 
 #include "fuzz_invariants.hpp"
@@ -92,8 +93,12 @@ extern "C" int LLVMFuzzerInitialize(int* argc, char*** argv) {
   for (auto& a : absolute) pointers.push_back(a.data());
   pointers.push_back(nullptr);
   *argv = pointers.data();
-  char dir[] = "/tmp/nondim_cli_fuzz_XXXXXX";
+  static char dir[] = "/tmp/nondim_cli_fuzz_XXXXXX";
   if (mkdtemp(dir) == nullptr || chdir(dir) != 0) std::abort();
+  std::atexit([] {
+    std::error_code ec;
+    std::filesystem::remove_all(dir, ec);
+  });
   std::ofstream("problem.toml") << problem_toml;
   std::ofstream("scale.toml") << scale_toml;
   return 0;
