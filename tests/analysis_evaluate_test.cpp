@@ -5,11 +5,13 @@
 #include <atomic>
 #include <cmath>
 #include <cstdlib>
+#include <limits>
 #include <map>
 #include <new>
 #include <span>
 #include <string>
 #include <unordered_map>
+#include <utility>
 #include <vector>
 
 namespace {
@@ -21,6 +23,12 @@ std::atomic<std::size_t> allocations{0};
   ++allocations;
   if (void* p = std::malloc(size == 0 ? 1 : size)) return p;
   throw std::bad_alloc();
+}
+// std::stable_sort takes its buffer with the nothrow form: it must come from malloc too,
+// since the delete below frees (AddressSanitizer reports the mismatch otherwise).
+[[gnu::noinline]] void* operator new(std::size_t size, const std::nothrow_t&) noexcept {
+  ++allocations;
+  return std::malloc(size == 0 ? 1 : size);
 }
 [[gnu::noinline]] void operator delete(void* p) noexcept {
   std::free(p);
@@ -134,6 +142,70 @@ TEST_SUITE("analysis evaluation") {
     std::vector<double> rho{998.0}, U{2.0}, D{0.05}, mu{1.0e-3}, out(1);
     const std::vector<std::span<const double>> columns{{}, rho, U, D, mu};
     a.groups[1].evaluate(columns, out);  // mu/(rho U D): F not read
+    CHECK(out[0] == doctest::Approx(1.0 / 99800.0).epsilon(1e-14));
+  }
+}
+
+namespace {
+/// The message and variable of the analysis_error `f` throws ("no error" when it does not).
+template <class F>
+std::pair<std::string, std::string> error_of(F f) {
+  try {
+    (void)f();
+  } catch (const analysis_error& e) {
+    return {e.what(), e.variable()};
+  }
+  return {"no error", ""};
+}
+}  // namespace
+
+TEST_SUITE("analysis evaluation") {
+  TEST_CASE("NaN, infinite values and zero divisors are refused with the variable named") {
+    // IEEE 754: NaN propagates through products and 1/inf is 0, so without a check a bad
+    // input would come out as a plausible group value.
+    const analysis a = analyze(sphere_drag());
+    const double nan = std::numeric_limits<double>::quiet_NaN();
+    const double inf = std::numeric_limits<double>::infinity();
+    const auto at = [&](std::size_t g, std::vector<double> si) {
+      return error_of([&] { return a.groups[g].value(si); });
+    };
+    const auto [m_nan, v_nan] = at(1, {0.8, 998.0, 2.0, 0.05, nan});
+    CHECK(v_nan == "mu");
+    CHECK(m_nan == "nondim: the value of 'mu' is NaN (group mu*rho^-1*U^-1*D^-1)");
+    const auto [m_inf, v_inf] = at(1, {0.8, 998.0, inf, 0.05, 1e-3});  // 1/inf would give 0
+    CHECK(v_inf == "U");
+    CHECK(m_inf.find("'U' is infinite") != std::string::npos);
+    const auto [m_zero, v_zero] = at(0, {0.8, 998.0, 2.0, 0.0, 1e-3});
+    CHECK(v_zero == "D");
+    CHECK(m_zero.find("'D' is 0, and the group divides by it") != std::string::npos);
+    // 1e300 / (998 * 4 * 1e-300^2) exceeds the largest double, about 1.8e308 (IEEE 754 binary64)
+    const auto [m_over, v_over] = at(0, {1e300, 998.0, 2.0, 1e-300, 1e-3});
+    CHECK(v_over.empty());
+    CHECK(m_over.find("overflows a double") != std::string::npos);
+    // a zero numerator is a value (no drag), and a negative velocity is squared: both are results
+    CHECK(a.groups[0].value(std::vector<double>{0.0, 998.0, 2.0, 0.05, 1e-3}) == 0.0);
+    CHECK(a.groups[0].value(std::vector<double>{0.8, 998.0, -2.0, 0.05, 1e-3}) ==
+          a.groups[0].value(std::vector<double>{0.8, 998.0, 2.0, 0.05, 1e-3}));
+    // by name
+    const std::map<std::string, double> named{{"rho", 998.0}, {"U", 2.0}, {"D", 0.05}, {"mu", nan}};
+    CHECK(error_of([&] { return a.groups[1].value(named); }).second == "mu");
+  }
+
+  TEST_CASE("a bad value in a field names the variable and the cell") {
+    const analysis a = analyze(sphere_drag());
+    const std::vector<double> rho{998.0, 998.0, 998.0};
+    const std::vector<double> U{2.0, 2.0, 2.0};
+    const std::vector<double> D{0.05, 0.05, 0.05};
+    const std::vector<double> mu{1e-3, 1e-3, std::numeric_limits<double>::quiet_NaN()};
+    const std::vector<std::span<const double>> columns{std::span<const double>{}, rho, U, D, mu};
+    std::vector<double> out(3, -1.0);
+    const auto [m, v] = error_of([&] {
+      a.groups[1].evaluate(columns, out);
+      return 0;
+    });
+    CHECK(v == "mu");
+    CHECK(m == "nondim: the value of 'mu' in cell 2 is NaN (group mu*rho^-1*U^-1*D^-1)");
+    // Re = 998 * 2 * 0.05 / 1e-3 = 99800 (common practice, no source): cells before the fault are written
     CHECK(out[0] == doctest::Approx(1.0 / 99800.0).epsilon(1e-14));
   }
 }

@@ -409,4 +409,19 @@ TEST_SUITE("pi_groups") {
     static_assert(std::is_same_v<decltype(v), const std::array<double, 1>>);
     CHECK(v[0] == 6.0 / (3.0 * 0.5));  // F/(k x), Hooke's law (common practice, no source)
   }
+
+  TEST_CASE("pi_product: a group chosen by hand, computed as pi_groups computes its own") {
+    // the towed pod above; White, Fluid Mechanics, ch. 5 (from memory): Re = rho U D / mu,
+    // C = F/(rho U^2 D^2); the Reynolds number is the inverse of pi_groups' second group.
+    const auto F = 3.9 * units::N;
+    const auto rho = 1025.0 * units::kg / units::m3;
+    const auto U = 1.7 * units::m / units::s;
+    const auto D = 0.12 * units::m;
+    const auto mu = 1.08e-3 * units::Pa * units::s;
+    const double re = pi_product<1, 1, 1, -1>(rho, U, D, mu);
+    CHECK(re == rho.si() * U.si() * D.si() / mu.si());
+    CHECK(pi_product<1, -1, -2, -2>(F, rho, U, D) == pi_groups(F, rho, U, D, mu)[0]);
+    static_assert(pi_product<1, -1, -2, -2>(F0, rho0, U0, D0) == 2.0 / (1.25 * (4.0 * 4.0) * (0.5 * 0.5)));
+    static_assert(pi_product<0>(F0) == 1.0);  // the empty product (common practice, no source)
+  }
 }

@@ -101,6 +101,43 @@ TEST_SUITE("problem file") {
     CHECK(message_of("[a]\n[a]\n").find("nondim: p.toml:2: not valid TOML") == 0);
   }
 
+  TEST_CASE("characters outside ASCII are text in strings and a TOML error elsewhere") {
+    // TOML 1.0.0: bare keys are ASCII letters, digits, '-' and '_'; other characters are
+    // allowed only in strings and comments. (The bytes CB 96 'r', U+02D6 then 'r', once
+    // made the TOML reader run into undefined behaviour.)
+    CHECK(message_of("\xcb\x96r").find("nondim: p.toml:1: not valid TOML") == 0);
+    CHECK(message_of("title = \"x\"\n\xce\xbc = 1\n").find("nondim: p.toml:2: not valid TOML") == 0);
+    CHECK(message_of("tit2e =12A=1\"A\xcb\x96\"").find("nondim: p.toml:1: not valid TOML") == 0);
+    CHECK(message_of("[[variable]]\nname = \"T\"\nunit = \xc2\xb0"
+                     "C\n")
+              .find("nondim: p.toml:3: not valid TOML") == 0);
+    // a Greek name, a degree sign, a middle dot, in strings of every kind, and a comment
+    const auto f = parse_problem_text(
+        "# \xce\xbc: viscosity\n[[variable]]\nname = \"\xce\xbc\"\nunit = '\xc2\xb0"
+        "C'\n"
+        "note = \"\"\"\xc2\xb7 \xd0\x96\\\n  \xc3\xa9\"\"\"\n",
+        "p.toml");
+    REQUIRE(f.variables.size() == 1);
+    CHECK(f.variables[0].name == "\xce\xbc");
+    CHECK(f.variables[0].unit ==
+          "\xc2\xb0"
+          "C");
+    CHECK(f.variables[0].unit_literal);
+    CHECK(f.variables[0].note == "\xc2\xb7 \xd0\x96\xc3\xa9");  // TOML 1.0.0: a line-ending backslash trims
+    // the reader's stand-ins (private use, plane 15) cannot be in the file itself
+    CHECK(message_of("title = \"\xf3\xb0\x80\x81\"\n") ==
+          "nondim: p.toml:1: column 10: the private-use character U+F0001 is not supported");
+  }
+
+  TEST_CASE("a file larger than the limit is refused unread") {
+    try {
+      (void)nondim::tool::load_problem_file("/dev/zero");
+      FAIL("no error");
+    } catch (const input_error& e) {
+      CHECK(std::string(e.what()) == "nondim: the problem file '/dev/zero' is larger than 1048576 bytes");
+    }
+  }
+
   TEST_CASE("a file that cannot be read is named") {
     try {
       (void)nondim::tool::load_problem_file("/nonexistent/dir/p.toml");

@@ -2,10 +2,12 @@
 
 #include <cerrno>
 #include <cmath>
+#include <cstdio>
 #include <cstring>
 #include <filesystem>
 #include <fstream>
-#include <sstream>
+#include <optional>
+#include <string>
 #include <utility>
 
 // header-only: see CMakeLists.txt
@@ -48,6 +50,110 @@ std::string_view type_name(const toml::node& n) {
   return "nothing";
 }
 
+/// The code point of UTF-8 `s` at byte `i` (U+FFFD for a bad sequence) and its length.
+std::pair<char32_t, std::size_t> code_point_at(std::string_view s, std::size_t i) {
+  const auto b = static_cast<unsigned char>(s[i]);
+  const std::size_t len = b >= 0xF0U ? 4 : b >= 0xE0U ? 3 : b >= 0xC0U ? 2 : 1;
+  if (len == 1 || i + len > s.size()) return {0xFFFD, 1};
+  char32_t c = b & (0x7FU >> len);
+  for (std::size_t k = 1; k < len; ++k) {
+    const auto t = static_cast<unsigned char>(s[i + k]);
+    if ((t & 0xC0U) != 0x80U) return {0xFFFD, 1};
+    c = (c << 6U) | (t & 0x3FU);
+  }
+  return {c, len};
+}
+
+/// Code points that toml++ 3.3 classifies with undefined behaviour when it asks whether
+/// they are white space (its generated table falls through to an unreachable branch):
+/// Latin-1 letters and signs, Greek, Cyrillic and a few more, common in notes and units.
+bool toml_reader_defect(char32_t c) {
+  return (c > 0xA0 && c < 0x49A) || (c >= 0x2F6E && c < 0x3368 && c != 0x3000) || (c >= 0xFB06 && c < 0xFEFF);
+}
+
+/// Such code points reach the reader moved into the private-use plane 15 (U+F0000 plus the
+/// code point), which it classifies safely, and are moved back in every string read.
+constexpr char32_t stand_in_base = 0xF0000;
+
+void append_utf8(std::string& out, char32_t c) {
+  const auto byte = [&](char32_t b) { out.push_back(static_cast<char>(static_cast<unsigned char>(b))); };
+  if (c < 0x80) {
+    byte(c);
+  } else if (c < 0x800) {
+    byte(0xC0U | (c >> 6U));
+    byte(0x80U | (c & 0x3FU));
+  } else if (c < 0x10000) {
+    byte(0xE0U | (c >> 12U));
+    byte(0x80U | ((c >> 6U) & 0x3FU));
+    byte(0x80U | (c & 0x3FU));
+  } else {
+    byte(0xF0U | (c >> 18U));
+    byte(0x80U | ((c >> 12U) & 0x3FU));
+    byte(0x80U | ((c >> 6U) & 0x3FU));
+    byte(0x80U | (c & 0x3FU));
+  }
+}
+
+/// `text` with every code point that `from` accepts replaced by `to` of it; other bytes
+/// (bad UTF-8 included) unchanged.
+template <class From, class To>
+std::string moved(std::string_view text, From from, To to) {
+  std::string out;
+  out.reserve(text.size());
+  for (std::size_t i = 0; i < text.size();) {
+    const auto [c, len] = code_point_at(text, i);
+    if (len > 1 && from(c)) {
+      append_utf8(out, to(c));
+    } else {
+      out.append(text.substr(i, len));
+    }
+    i += len;
+  }
+  return out;
+}
+
+std::string to_reader(std::string_view text) {
+  return moved(text, toml_reader_defect, [](char32_t c) { return stand_in_base + c; });
+}
+
+std::string from_reader(std::string_view text) {
+  return moved(
+      text,
+      [](char32_t c) {
+        return c >= stand_in_base && c < stand_in_base + 0x10000 && toml_reader_defect(c - stand_in_base);
+      },
+      [](char32_t c) { return c - stand_in_base; });
+}
+
+struct text_fault {
+  std::size_t line = 0;
+  std::size_t column = 0;
+  std::string what;
+};
+
+/// The first private-use code point of plane 15 in `text` (where the stand-ins live), with
+/// its line and column, for the message that refuses it.
+std::optional<text_fault> stand_in_fault(std::string_view t) {
+  std::size_t line = 1;
+  std::size_t column = 1;
+  for (std::size_t i = 0; i < t.size();) {
+    const auto [c, len] = code_point_at(t, i);
+    if (len > 1 && c >= stand_in_base && c <= 0xFFFFF) {
+      char hex[16];
+      std::snprintf(hex, sizeof hex, "U+%05X", static_cast<unsigned>(c));
+      return text_fault{line, column, std::string("the private-use character ") + hex + " is not supported"};
+    }
+    if (t[i] == '\n') {
+      ++line;
+      column = 1;
+    } else {
+      ++column;
+    }
+    i += len;
+  }
+  return std::nullopt;
+}
+
 class checker {
  public:
   checker(std::string_view text, const problem_file& out) : text_(text), out_(out) {}
@@ -59,7 +165,7 @@ class checker {
   std::string string_value(const toml::node& n, std::string_view what) const {
     const auto* s = n.as_string();
     if (s == nullptr) fail(n.source(), std::string(what) + " must be a string, not " + std::string(type_name(n)));
-    return s->get();
+    return from_reader(s->get());
   }
 
   double number_value(const toml::node& n, std::string_view what) const {
@@ -107,7 +213,7 @@ void read_variable(const checker& c, const toml::table& t, std::size_t index, pr
   bool has_name = false;
   bool has_unit = false;
   for (auto&& [key, node] : t) {
-    const std::string_view k = key.str();
+    const std::string k = from_reader(key.str());
     if (k == "name") {
       v.name = c.string_value(node, "'name' of " + label);
       if (const auto why = bad_variable_name(v.name)) c.fail(node.source(), "'name' of " + label + ": " + *why);
@@ -167,16 +273,19 @@ std::optional<std::string> bad_variable_name(std::string_view name) {
 problem_file parse_problem_text(std::string_view text, const std::string& path) {
   problem_file out;
   out.path = path;
+  if (const auto f = stand_in_fault(text))
+    throw input_error(
+        with_prefix(out.at({f->line, f->column}) + "column " + std::to_string(f->column) + ": " + f->what));
   toml::table root;
   try {
-    root = toml::parse(text, path);
+    root = toml::parse(to_reader(text), path);
   } catch (const toml::parse_error& e) {
-    throw input_error(with_prefix(out.at(position_of(e.source())) + "not valid TOML: " + std::string(e.description())));
+    throw input_error(with_prefix(out.at(position_of(e.source())) + "not valid TOML: " + from_reader(e.description())));
   }
   const checker c(text, out);
   const toml::array* variables = nullptr;
   for (auto&& [key, node] : root) {
-    const std::string_view k = key.str();
+    const std::string k = from_reader(key.str());
     if (k == "title") {
       out.title = c.string_value(node, "'title'");
     } else if (k == "dependent") {
@@ -217,10 +326,18 @@ problem_file load_problem_file(const std::string& path) {
     throw input_error(with_prefix("cannot read the problem file '" + path + "': it is a directory"));
   std::ifstream in(path, std::ios::binary);
   if (!in) throw input_error(with_prefix("cannot read the problem file '" + path + "': " + std::strerror(errno)));
-  std::ostringstream buffer;
-  buffer << in.rdbuf();
+  // read at most one byte past the limit: a device such as /dev/zero must not fill memory
+  std::string text;
+  char chunk[65536];
+  while (in && text.size() <= max_problem_file_bytes) {
+    in.read(chunk, sizeof chunk);
+    text.append(chunk, static_cast<std::size_t>(in.gcount()));
+  }
   if (in.bad()) throw input_error(with_prefix("cannot read the problem file '" + path + "'"));
-  return parse_problem_text(buffer.str(), path);
+  if (text.size() > max_problem_file_bytes)
+    throw input_error(with_prefix("the problem file '" + path + "' is larger than " +
+                                  std::to_string(max_problem_file_bytes) + " bytes"));
+  return parse_problem_text(text, path);
 }
 
 }  // namespace nondim::tool

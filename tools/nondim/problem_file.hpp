@@ -48,8 +48,12 @@ struct problem_file {
   [[nodiscard]] std::string at(const file_position& p) const;
 };
 
+/// Problem files longer than this many bytes (1 MiB) are refused unread.
+inline constexpr std::size_t max_problem_file_bytes = std::size_t{1} << 20U;
+
 /// \brief Reads and checks the problem file at `path`.
-/// \throws input_error when the file cannot be read, is not TOML, or breaks the schema.
+/// \throws input_error when the file cannot be read, is longer than
+///         `max_problem_file_bytes`, is not TOML, or breaks the schema.
 problem_file load_problem_file(const std::string& path);
 
 /// \brief Checks problem-file text; `path` is used in messages only.

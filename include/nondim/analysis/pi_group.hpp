@@ -3,6 +3,7 @@
 /// \brief `pi_group`: one dimensionless group, a product of powers of the variables with
 /// integer exponents; its text forms and its value from SI values.
 
+#include <cmath>
 #include <cstddef>
 #include <cstdint>
 #include <span>
@@ -84,7 +85,9 @@ struct pi_group {
   }
 
   /// \brief The value of the group from the SI values of all the variables, in order.
-  /// \throws analysis_error when `si_values` does not have one value per variable.
+  /// \throws analysis_error when `si_values` does not have one value per variable; when a
+  ///         value the group needs is NaN or infinite, or is 0 where the group divides by
+  ///         it (naming the variable); when the value overflows a double.
   [[nodiscard]] double value(std::span<const double> si_values) const {
     if (si_values.size() != exponents.size())
       throw analysis_error(detail::cat({"nondim: ", std::to_string(si_values.size()), " values given for a group of ",
@@ -92,12 +95,15 @@ struct pi_group {
     double r = 1.0;
     for (std::size_t i = 0; i < exponents.size(); ++i)
       if (exponents[i] != 0) r = detail::apply_factor(r, si_values[i], exponents[i]);
+    check_result(r, [&](std::size_t i) { return si_values[i]; });
     return r;
   }
 
   /// \brief The value of the group from SI values by name (any map from names to doubles,
   /// e.g. `std::map<std::string, double>`); only the variables in the group are needed.
-  /// \throws analysis_error naming the first variable of the group without a value.
+  /// \throws analysis_error naming the first variable of the group without a value, or
+  ///         one whose value is NaN, infinite, or 0 where the group divides by it; when
+  ///         the value overflows a double.
   template <class Map>
   requires requires(const Map& m, const std::string& k) {
     m.find(k) != m.end();
@@ -114,6 +120,7 @@ struct pi_group {
             variables[i]);
       r = detail::apply_factor(r, static_cast<double>(it->second), exponents[i]);
     }
+    check_result(r, [&](std::size_t i) { return static_cast<double>(si_values.find(variables[i])->second); });
     return r;
   }
 
@@ -124,7 +131,9 @@ struct pi_group {
   /// allocated; `out` may be one of the columns (each cell is read before it is written).
   /// The result in each cell is bit-for-bit that of `value()`.
   /// \throws analysis_error when the number of columns is not the number of variables, or a
-  ///         column the group needs does not have `out.size()` cells (naming its variable).
+  ///         column the group needs does not have `out.size()` cells (naming its variable);
+  ///         as `value()` for a bad value, naming the variable and the cell (cells before it
+  ///         are written).
   void evaluate(std::span<const std::span<const double>> columns, std::span<double> out) const {
     if (columns.size() != exponents.size())
       throw analysis_error(detail::cat({"nondim: ", std::to_string(columns.size()), " columns given for a group of ",
@@ -139,11 +148,42 @@ struct pi_group {
       double r = 1.0;
       for (std::size_t i = 0; i < exponents.size(); ++i)
         if (exponents[i] != 0) r = detail::apply_factor(r, columns[i][c], exponents[i]);
+      if (!std::isfinite(r) || r == 0.0)
+        check_result(
+            r, [&](std::size_t i) { return columns[i][c]; }, c);
       out[c] = r;
     }
   }
 
   friend bool operator==(const pi_group&, const pi_group&) = default;
+
+ private:
+  /// Throws when `r`, the group's value from the values `x(i)`, comes from a value that is
+  /// no number (NaN, infinite, or 0 raised to a negative power), or overflows a double.
+  /// Infinite values can give 0 (1/inf), so a zero result is examined too; a zero from a
+  /// value 0 raised to a positive power (or an underflow) is a result.
+  /// `cell`: the cell of a field, for the message (none for a single value).
+  template <class Value>
+  void check_result(double r, Value x, std::size_t cell = static_cast<std::size_t>(-1)) const {
+    if (std::isfinite(r) && r != 0.0) return;
+    const std::string where =
+        cell == static_cast<std::size_t>(-1) ? std::string() : detail::cat({" in cell ", std::to_string(cell)});
+    for (std::size_t i = 0; i < exponents.size(); ++i) {
+      if (exponents[i] == 0) continue;
+      const double v = x(i);
+      const char* what = std::isnan(v)                  ? " is NaN"
+                         : std::isinf(v)                ? " is infinite"
+                         : v == 0.0 && exponents[i] < 0 ? " is 0, and the group divides by it"
+                                                        : nullptr;
+      if (what != nullptr)
+        throw analysis_error(detail::cat({"nondim: the value of '", variables[i], "'", where, what, " (group ",
+                                          text(text_form::ascii), ")"}),
+                             variables[i]);
+    }
+    if (!std::isfinite(r))
+      throw analysis_error(detail::cat({"nondim: the value of the group ", text(text_form::ascii), where,
+                                        " overflows a double (", std::to_string(r), ")"}));
+  }
 };
 
 }  // namespace nondim

@@ -1,7 +1,8 @@
 #pragma once
 /// \file pi_groups.hpp
 /// \brief Dimensionless groups computed at compile time from the dimensions of a solver's
-/// variables: `pi_exponents<D...>()` gives the exponents, `pi_groups(q...)` the values.
+/// variables: `pi_exponents<D...>()` gives the exponents, `pi_groups(q...)` the values;
+/// `pi_product<E...>(q...)` the value of one group with exponents chosen by hand.
 /// Standard library only.
 ///
 /// The basis is the classical one of the run-time `analyze()` with automatic repeating
@@ -202,6 +203,49 @@ constexpr double group_value(const std::array<double, sizeof...(I)>& x, std::ind
   }
 }
 
+/// The dimension of the product of D[i]^E[i] (overflow of the exact arithmetic flagged).
+template <std::size_t N>
+struct product_dimension {
+  bool overflow = false;
+  dimension dim{};
+};
+template <std::size_t N>
+consteval product_dimension<N> dimension_of_product(const std::array<dimension, N>& d,
+                                                    const std::array<std::int64_t, N>& e) {
+  guarded_arithmetic g;
+  product_dimension<N> out{};
+  for (std::size_t i = 0; i < N; ++i)
+    for (std::size_t b = 0; b < base_dimension_count; ++b)
+      out.dim.exponents[b] = g.add(out.dim.exponents[b], g.mul(d[i].exponents[b], rational{e[i]}));
+  out.overflow = g.overflow;
+  return out;
+}
+
+/// Fails with a `nondim:` message showing the dimension of the product of Dims[i]^Exps[i]
+/// unless it is 1. (At namespace scope, on constants: GCC 12 crashes on the spelling of a
+/// computed dimension inside `pi_product`.)
+template <auto Dims, auto Exps>
+constexpr bool product_is_dimensionless() {
+  constexpr product_dimension<Dims.size()> product = dimension_of_product(Dims, Exps);
+  constexpr dimension dim = product.dim;
+  static_assert(!product.overflow, "nondim: the dimension of this product overflows 64-bit rational exponents");
+  static_assert(holds<(product.overflow || dim == dimension{}), spell<dim>>,
+                "nondim: this product of powers is not dimensionless, so it is no group; its dimension is "
+                "shown (dim<...>): change the exponents");
+  return true;
+}
+
+/// (product of the positive powers, left to right) / (product of the negative ones) of `x`.
+template <std::int64_t... E, std::size_t... I>
+constexpr double chosen_group_value(const std::array<double, sizeof...(E)>& x, std::index_sequence<I...>) noexcept {
+  constexpr bool any_negative = ((E < 0) || ...);
+  if constexpr (!any_negative) {
+    return (1.0 * ... * unrolled_power<positive_part(E)>(x[I]));
+  } else {
+    return (1.0 * ... * unrolled_power<positive_part(E)>(x[I])) / (1.0 * ... * unrolled_power<negative_part(E)>(x[I]));
+  }
+}
+
 template <const auto& Exponents, std::size_t N, std::size_t... G>
 constexpr std::array<double, sizeof...(G)> evaluate_groups(const std::array<double, N>& x,
                                                            std::index_sequence<G...>) noexcept {
@@ -270,6 +314,32 @@ constexpr auto pi_groups(const Q&... q) noexcept {
     constexpr auto& exponents = detail::group_exponents<std::remove_cvref_t<Q>::dim...>;
     const std::array<double, sizeof...(Q)> x{static_cast<double>(q.si())...};
     return detail::evaluate_groups<exponents>(x, std::make_index_sequence<exponents.size()>{});
+  }
+}
+
+/// \brief The value of one dimensionless group whose exponents are chosen by hand, one per
+/// argument, fixed at compile time: `pi_product<1, -1, -2, -2>(F, rho, U, D)` is
+/// F/(rho U^2 D^2), computed as `pi_groups` computes its groups.
+///
+/// A product whose dimension is not 1 does not compile (the diagnostic shows its dimension),
+/// nor does a count of exponents other than the count of arguments, or an argument that is
+/// not a quantity.
+template <std::int64_t... E, class... Q>
+constexpr double pi_product(const Q&... q) noexcept {
+  static_assert(sizeof...(E) == sizeof...(Q), "nondim: pi_product takes one exponent per argument");
+  constexpr std::size_t bad = detail::first_non_quantity<Q...>();
+  if constexpr (sizeof...(E) != sizeof...(Q)) {
+    return 0.0;
+  } else if constexpr (bad < sizeof...(Q)) {
+    static_assert(detail::holds<false, detail::not_a_quantity<bad + 1, std::tuple_element_t<bad, std::tuple<Q...>>>>,
+                  "nondim: pi_product takes quantities (quantity<D, Rep>) only; the argument at the position "
+                  "shown is not one");
+    return 0.0;
+  } else {
+    detail::product_is_dimensionless<std::array<dimension, sizeof...(Q)>{std::remove_cvref_t<Q>::dim...},
+                                     std::array<std::int64_t, sizeof...(E)>{E...}>();
+    const std::array<double, sizeof...(Q)> x{static_cast<double>(q.si())...};
+    return detail::chosen_group_value<E...>(x, std::index_sequence_for<Q...>{});
   }
 }
 

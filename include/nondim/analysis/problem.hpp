@@ -35,6 +35,11 @@ struct variable {
   friend bool operator==(const variable&, const variable&) = default;
 };
 
+/// \brief Most variables a problem takes. The analysis needs time and memory that grow as
+/// the square of the count (a problem of 1000 variables takes about 0.1 s, 1.5 s in the
+/// named basis, on a 2-core Xeon); real problems have a few dozen.
+inline constexpr std::size_t max_problem_variables = 1000;
+
 /// \brief The variables of a problem, in the order they were added (the order of the
 /// columns of the dimension matrix and of every exponent vector).
 class problem {
@@ -42,7 +47,8 @@ class problem {
   problem() = default;
 
   /// \brief Adds a variable of dimension `d` (coherent SI unit).
-  /// \throws analysis_error when `name` is empty or already in the problem.
+  /// \throws analysis_error when `name` is empty or already in the problem, or the problem
+  ///         has `max_problem_variables` already.
   problem& add(std::string name, dimension d) {
     check_name(name);
     std::string unit = si_unit_string(d, text_form::ascii);
@@ -53,9 +59,9 @@ class problem {
   /// \brief Adds a variable whose unit is the expression `unit_text` (read by `parse_unit`:
   /// `"kg/m^3"`, `"Pa*s"`, `"lbf"`, `"degC"`); its factor and offset to SI are kept, so that
   /// values can be given and reported in the variable's own unit.
-  /// \throws analysis_error when `name` is empty or already in the problem, or when the
-  ///         unit cannot be read; then the message names the variable and the unit, and
-  ///         the `unit_error` (with its column) is nested (`std::rethrow_if_nested`) and its
+  /// \throws analysis_error when `name` is empty or already in the problem, when the
+  ///         problem has `max_problem_variables` already, or when the unit cannot be read; then the message names the
+  ///         variable and the unit, and the `unit_error` (with its column) is nested (`std::rethrow_if_nested`) and its
   ///         column is given by `analysis_error::unit_column()`.
   problem& add(std::string name, std::string_view unit_text) {
     check_name(name);
@@ -109,6 +115,11 @@ class problem {
           {"nondim: variable ", std::to_string(variables_.size() + 1), " of the problem has an empty name"}));
     if (index_of(name))
       throw analysis_error(detail::cat({"nondim: variable '", name, "' is already in the problem"}), name);
+    if (variables_.size() == max_problem_variables)
+      throw analysis_error(
+          detail::cat({"nondim: variable '", name, "' would be number ", std::to_string(max_problem_variables + 1),
+                       ": a problem takes at most ", std::to_string(max_problem_variables), " variables"}),
+          name);
   }
 
   std::vector<variable> variables_;
