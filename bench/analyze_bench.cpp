@@ -129,6 +129,11 @@ void run_svd(const case_data& c) {
   const Eigen::JacobiSVD<Eigen::MatrixXd> svd(c.dense);
   benchmark::DoNotOptimize(svd.singularValues().data());
 }
+// analyze()'s own SVD step alone (singular values and numerical rank, no groups to check)
+void run_svd_check(const case_data& c) {
+  const svd_check s = check_with_svd(c.exact, {}, 0);
+  benchmark::DoNotOptimize(s.singular_values.data());
+}
 // with V: what a floating-point null space needs (its last columns)
 void run_svd_v(const case_data& c) {
   const Eigen::JacobiSVD<Eigen::MatrixXd> svd(c.dense, Eigen::ComputeFullV);
@@ -177,6 +182,7 @@ void register_all() {
       {"analyze_named", run_set<run_analyze_named>},
       {"svd", run_set<run_svd>},
       {"svd_v", run_set<run_svd_v>},
+      {"svd_check", run_set<run_svd_check>},
       {"fullpivlu_kernel", run_set<run_fullpivlu>},
       {"elimination_int64", run_set<run_elimination_int64>},
       {"elimination_cpp_rational", run_set<run_elimination_rational>},
@@ -251,9 +257,25 @@ class ratio_reporter : public benchmark::ConsoleReporter {
       line(s, "analyze", "svd", "(<= 3)");
       line(s, "analyze", "svd_v", "");
       line(s, "analyze_named", "svd", "");
+      line(s, "svd_check", "svd", "");
       line(s, "elimination_int64", "fullpivlu_kernel", "(<= 2)");
       line(s, "elimination_cpp_rational", "elimination_int64", "(>= 10)");
       line(s, "echelon_cpp_rational", "echelon_int64", "");
+    }
+    std::printf("\nmedian CPU time per matrix, microseconds:\n");
+    for (const char* set : {"textbook", "random7x20", "random7x30"}) {
+      const std::string s(set);
+      const double count = static_cast<double>(sets().at(s).size());
+      std::string row;
+      for (const char* m : {"analyze", "analyze_named", "svd", "svd_v", "svd_check", "fullpivlu_kernel",
+                            "elimination_int64", "elimination_cpp_rational", "echelon_int64", "echelon_cpp_rational"}) {
+        const auto t = times_.find(s + "/" + m);
+        if (t == times_.end()) continue;
+        char buf[96];
+        std::snprintf(buf, sizeof buf, " %s %.3g", m, t->second / count);
+        row += buf;
+      }
+      std::printf("  %-10s%s\n", set, row.c_str());
     }
     std::printf("\ngrowth with the count of variables n (median CPU time per call, microseconds):\n");
     for (const char* name : {"analyze", "elimination_int64", "svd"}) {

@@ -48,6 +48,7 @@ inline null_space_basis exact_null_space(const dimension_matrix& a,
     std::vector<bool> is_pivot(n, false);
     for (std::size_t p : out.pivots) is_pivot[p] = true;
     std::vector<F> x(n);
+    out.vectors.reserve(n - out.rank);
     for (std::size_t c = 0; c < n; ++c) {
       if (is_pivot[c]) continue;
       std::fill(x.begin(), x.end(), F(0));

@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <cmath>
 #include <cstddef>
+#include <cstdint>
 #include <limits>
 #include <vector>
 
@@ -59,13 +60,20 @@ inline svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_
   }
   out.agrees = out.rank == exact_rank;
 
+  // |A v| / |v| per group, in plain loops (no temporaries)
   for (const auto& g : groups) {
     if (static_cast<Eigen::Index>(g.exponents.size()) != cols) continue;
-    Eigen::VectorXd v(cols);
-    for (Eigen::Index j = 0; j < cols; ++j) v(j) = static_cast<double>(g.exponents[static_cast<std::size_t>(j)]);
-    const double norm = v.norm();
-    if (norm == 0.0) continue;
-    out.max_residual = std::max(out.max_residual, (m * v).norm() / norm);
+    double vv = 0.0;
+    for (const std::int64_t e : g.exponents) vv += static_cast<double>(e) * static_cast<double>(e);
+    if (vv == 0.0) continue;
+    double av = 0.0;
+    for (Eigen::Index i = 0; i < rows; ++i) {
+      double x = 0.0;
+      for (Eigen::Index j = 0; j < cols; ++j)
+        x += m(i, j) * static_cast<double>(g.exponents[static_cast<std::size_t>(j)]);
+      av += x * x;
+    }
+    out.max_residual = std::max(out.max_residual, std::sqrt(av) / std::sqrt(vv));
   }
   return out;
 }

@@ -4,6 +4,7 @@
 /// checked int64 first, again in cpp_rational when that overflows.
 
 #include <algorithm>
+#include <array>
 #include <cstddef>
 #include <cstdint>
 #include <span>
@@ -86,7 +87,9 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
       if (std::find(given.begin(), given.end(), j) == given.end()) order.push_back(j);
   } else {
     std::vector<F> weight(n);
+    std::vector<std::size_t> bases(n);
     for (std::size_t j = 0; j < n; ++j) {
+      bases[j] = dims[j].base_count();
       F w = 0;
       for (std::size_t i = 0; i < base_dimension_count; ++i) {
         const F e = from_rational<F>(dims[j][i]);
@@ -97,9 +100,7 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     for (std::size_t j = 0; j < n; ++j)
       if (j != dependent) order.push_back(j);
     std::stable_sort(order.begin(), order.end(), [&](std::size_t a, std::size_t b) {
-      const std::size_t ca = dims[a].base_count();
-      const std::size_t cb = dims[b].base_count();
-      if (ca != cb) return ca < cb;
+      if (bases[a] != bases[b]) return bases[a] < bases[b];
       return weight[a] < weight[b];  // stable: input order breaks ties
     });
     order.push_back(dependent);
@@ -166,7 +167,22 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   }
 
   // The dimensions spanned: the reduced form of the transpose, whose rows are a basis of
-  // the column space expressed over the base dimensions (explains rank deficiency).
+  // the column space expressed over the base dimensions (explains rank deficiency). When
+  // the rank equals the count of base dimensions present, the column space is spanned by
+  // those base dimensions and that reduced form is their unit rows, in order: no second
+  // elimination is needed.
+  std::vector<std::size_t> present;
+  for (std::size_t i = 0; i < base_dimension_count; ++i)
+    if (std::any_of(dims.begin(), dims.end(), [i](const dimension& d) { return !d[i].is_zero(); }))
+      present.push_back(i);
+  if (present.size() == out.rank) {
+    for (std::size_t i : present) {
+      std::array<rational, base_dimension_count> e{};
+      e[i] = 1;
+      out.spanning.emplace_back(e);
+    }
+    return out;
+  }
   exact_matrix<F> t(n, base_dimension_count);
   for (std::size_t j = 0; j < n; ++j)
     for (std::size_t i = 0; i < base_dimension_count; ++i) t(j, i) = from_rational<F>(dims[j][i]);
