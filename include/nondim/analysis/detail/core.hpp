@@ -106,8 +106,9 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     order.push_back(dependent);
   }
 
-  exact_matrix<F> m = dimension_columns<F>(dims, order);
-  const std::vector<std::size_t> pivots = reduce_to_echelon(m);
+  const exact_matrix<F> m = dimension_columns<F>(dims, order);
+  const auto ech = fraction_free_echelon(m);
+  const std::vector<std::size_t>& pivots = ech.pivots;
   out.rank = pivots.size();
 
   if (!given.empty()) {
@@ -127,7 +128,7 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
       std::vector<F> used_e;
       for (std::size_t r = 0; r < k; ++r) {
         used.push_back(names[given[r]]);
-        used_e.push_back(m(r, k));
+        used_e.push_back(ratio(ech(r, k), ech.denominator));
       }
       const std::string& who = names[given[k]];
       throw analysis_error(cat({"nondim: the repeating variables must have independent dimensions, but that of '", who,
@@ -151,13 +152,10 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   for (std::size_t c = 0; c < n; ++c)
     if (!is_pivot[c]) free_columns.emplace_back(order[c], c);
   std::sort(free_columns.begin(), free_columns.end());
-  std::vector<F> x(n);
+  out.groups.reserve(free_columns.size());
   for (const auto& [head, c] : free_columns) {
-    std::fill(x.begin(), x.end(), F(0));
-    x[head] = F(1);
-    for (std::size_t r = 0; r < pivots.size(); ++r) x[order[pivots[r]]] = F(-m(r, c));
     try {
-      out.groups.push_back(primitive_integer_vector(std::span<const F>(x)));
+      out.groups.push_back(echelon_null_vector(ech, c, std::span<const std::size_t>(order), n));
     } catch (const integers_too_large& e) {
       throw analysis_error(cat({"nondim: the group of '", names[head], "' needs an exponent beyond 64 bits (",
                                 e.example, "); the exact answer cannot be given as int64 exponents"}),

@@ -9,6 +9,7 @@
 #include <limits>
 #include <span>
 #include <string>
+#include <type_traits>
 #include <utility>
 #include <vector>
 
@@ -147,60 +148,133 @@ inline big_rational ratio(const big_integer& n, const big_integer& d) {
   return x;
 }
 
-/// \brief Reduces `m` in place to its reduced row echelon form (Gauss-Jordan) and returns
-/// the pivot columns, left to right; their count is the rank.
+/// \brief The reduced row echelon form of a matrix over F, held as integers: for a row
+/// `i < rank`, the reduced row is `z(i, k) / denominator`, one positive denominator for
+/// all rows; rows from `rank` on are zero.
+template <class I>
+struct integer_echelon {
+  std::size_t rows = 0;
+  std::size_t cols = 0;
+  std::vector<I> z;                 ///< row-major
+  std::vector<std::size_t> pivots;  ///< pivot columns, left to right; their count is the rank
+  I denominator = 1;
+
+  I& operator()(std::size_t r, std::size_t c) { return z[r * cols + c]; }
+  const I& operator()(std::size_t r, std::size_t c) const { return z[r * cols + c]; }
+};
+
+/// \brief The reduced row echelon form of `m` (Gauss-Jordan), as integers.
 ///
 /// The reduced form is unique, so neither the pivot chosen in a column nor the way the
 /// rows are combined changes the result. The elimination is fraction-free: each row is kept
-/// as integers (the rational row times a positive factor), a row is cleared with
-/// `p * row - q * pivot_row` and divided by the gcd of its entries, and only the final
-/// rows are divided by their pivots. Against combining rational entries this saves the
-/// gcds of every entry operation (the row gcd stops at the first 1). The first non-zero
-/// entry of a column is the pivot; zero entries are skipped (dimension matrices are
-/// sparse). With F = rational every operation is checked in int64 and throws
+/// as integers (the rational row times a factor), a row is cleared with
+/// `p * row - q * pivot_row` and divided by the gcd of its entries (which stops at the first
+/// 1), and at the end every row is brought to the lcm of the pivots. Against combining
+/// rational entries this saves the gcds of every entry operation. The entries then are
+/// minors of the matrix up to a common factor, as small as the reduced form allows. The
+/// first non-zero entry of a column is the pivot; zero entries are skipped (dimension
+/// matrices are sparse). With F = rational every operation is checked in int64 and throws
 /// `rational_overflow`; with F = cpp_rational the integers are cpp_int, the same steps.
 template <class F>
-std::vector<std::size_t> reduce_to_echelon(exact_matrix<F>& m) {
+integer_echelon<typename row_integer<F>::type> fraction_free_echelon(const exact_matrix<F>& m) {
   using I = typename row_integer<F>::type;
+  integer_echelon<I> e;
   const std::size_t rows = m.rows;
   const std::size_t cols = m.cols;
-  std::vector<I> z(rows * cols);
-  for (std::size_t i = 0; i < rows; ++i) integer_row(m, i, &z[i * cols]);
-  const auto at = [&](std::size_t i, std::size_t k) -> I& { return z[i * cols + k]; };
+  e.rows = rows;
+  e.cols = cols;
+  e.z.resize(rows * cols);
+  for (std::size_t i = 0; i < rows; ++i) integer_row(m, i, &e.z[i * cols]);
 
-  std::vector<std::size_t> pivots;
   std::size_t r = 0;
   for (std::size_t c = 0; c < cols && r < rows; ++c) {
     std::size_t p = r;
-    while (p < rows && is_zero(at(p, c))) ++p;
+    while (p < rows && is_zero(e(p, c))) ++p;
     if (p == rows) continue;
     if (p != r)
-      for (std::size_t k = 0; k < cols; ++k) std::swap(at(p, k), at(r, k));
-    const I pivot = at(r, c);
+      for (std::size_t k = 0; k < cols; ++k) std::swap(e(p, k), e(r, k));
+    const I pivot = e(r, c);
     for (std::size_t i = 0; i < rows; ++i) {
-      if (i == r || is_zero(at(i, c))) continue;
-      const I q = at(i, c);
+      if (i == r || is_zero(e(i, c))) continue;
+      const I q = e(i, c);
       I g = 0;
       for (std::size_t k = 0; k < cols; ++k) {
         if (k == c) {
-          at(i, k) = 0;
+          e(i, k) = 0;
           continue;
         }
-        if (is_zero(at(i, k)) && is_zero(at(r, k))) continue;
-        at(i, k) = combine(pivot, at(i, k), q, at(r, k));
-        if (!is_unit(g)) g = integer_gcd(g, at(i, k));
+        if (is_zero(e(i, k)) && is_zero(e(r, k))) continue;
+        e(i, k) = combine(pivot, e(i, k), q, e(r, k));
+        if (!is_unit(g)) g = integer_gcd(g, e(i, k));
       }
       if (!is_zero(g) && !is_unit(g))
-        for (std::size_t k = 0; k < cols; ++k) at(i, k) /= g;
+        for (std::size_t k = 0; k < cols; ++k) e(i, k) /= g;
     }
-    pivots.push_back(c);
+    e.pivots.push_back(c);
     ++r;
   }
 
-  for (std::size_t i = 0; i < rows; ++i)
+  // one denominator: the lcm of the pivots' magnitudes; row i is scaled by it / its pivot
+  // (each row is primitive here, so its pivot is the lcm of its reduced denominators and
+  // the common one divides the determinant of the pivot columns)
+  I d = 1;
+  for (std::size_t i = 0; i < r; ++i) {
+    const I& pv = e(i, e.pivots[i]);
+    const I g = integer_gcd(d, pv);
+    d = combine(d / g, pv, I(0), I(0));  // d / g * pv, checked
+  }
+  if (d < 0) d = combine(I(-1), d, I(0), I(0));
+  for (std::size_t i = 0; i < r; ++i) {
+    const I f = d / e(i, e.pivots[i]);
+    if (f == 1) continue;
     for (std::size_t k = 0; k < cols; ++k)
-      m(i, k) = i < r && !is_zero(at(i, k)) ? ratio(at(i, k), at(i, pivots[i])) : F(0);
-  return pivots;
+      if (!is_zero(e(i, k))) e(i, k) = combine(f, e(i, k), I(0), I(0));
+  }
+  e.denominator = d;
+  return e;
+}
+
+/// \brief Reduces `m` in place to its reduced row echelon form (Gauss-Jordan, see
+/// `fraction_free_echelon`) and returns the pivot columns, left to right; their count is
+/// the rank.
+template <class F>
+std::vector<std::size_t> reduce_to_echelon(exact_matrix<F>& m) {
+  auto e = fraction_free_echelon(m);
+  const std::size_t rank = e.pivots.size();
+  for (std::size_t i = 0; i < m.rows; ++i)
+    for (std::size_t k = 0; k < m.cols; ++k)
+      m(i, k) = i < rank && !is_zero(e(i, k)) ? ratio(e(i, k), e.denominator) : F(0);
+  return e.pivots;
+}
+
+/// \brief The null vector of the free column `c` of the reduced form `e`, as primitive
+/// integers with a positive entry at `c`: entry `where[c]` is 1 and entry `where[pivot r]`
+/// is minus the reduced entry (r, c), scaled; `n` entries, zero elsewhere. The same vector
+/// as `primitive_integer_vector` of those rationals, without their lcm: the common
+/// denominator is known.
+/// \throws integers_too_large (cpp_int) when an entry does not fit in int64;
+///         rational_overflow (int64) when a negation does not fit.
+template <class I>
+std::vector<std::int64_t> echelon_null_vector(const integer_echelon<I>& e, std::size_t c,
+                                              std::span<const std::size_t> where, std::size_t n) {
+  I g = e.denominator;
+  for (std::size_t r = 0; r < e.pivots.size() && !is_unit(g); ++r)
+    if (!is_zero(e(r, c))) g = integer_gcd(g, e(r, c));
+  std::vector<std::int64_t> out(n);
+  const auto put = [&](std::size_t at, const I& v) {
+    const I q = is_unit(g) ? v : I(v / g);
+    if constexpr (std::is_same_v<I, std::int64_t>) {
+      out[at] = q;
+    } else {
+      if (q < std::numeric_limits<std::int64_t>::min() || q > std::numeric_limits<std::int64_t>::max())
+        throw integers_too_large{q.str()};
+      out[at] = q.template convert_to<std::int64_t>();
+    }
+  };
+  put(where[c], e.denominator);
+  for (std::size_t r = 0; r < e.pivots.size(); ++r)
+    if (!is_zero(e(r, c))) put(where[e.pivots[r]], combine(I(0), I(0), I(1), e(r, c)));  // -z(r, c)
+  return out;
 }
 
 /// \brief The rational vector `v` scaled by a positive factor to integers whose gcd is 1
