@@ -26,6 +26,7 @@
 #include <Eigen/LU>
 #include <Eigen/SVD>
 
+#include <algorithm>
 #include <cmath>
 #include <cstddef>
 #include <cstdint>
@@ -34,6 +35,8 @@
 #include <random>
 #include <string>
 #include <vector>
+
+#include <time.h>
 
 #include "textbook_problems.hpp"
 
@@ -323,6 +326,69 @@ class ratio_reporter : public benchmark::ConsoleReporter {
   std::map<std::string, double> times_;
 };
 
+// ---- interleaved ratios --------------------------------------------------------------
+// The machine is shared: Google Benchmark times one method after the other, so a change of
+// load between them shows in their ratio. Here the two methods alternate (which goes first
+// alternates too) in each of `rounds` rounds, each timed in thread CPU time over the whole
+// set, and the median of the per-round ratios is reported.
+
+double thread_seconds() {
+  timespec ts{};
+  clock_gettime(CLOCK_THREAD_CPUTIME_ID, &ts);
+  return static_cast<double>(ts.tv_sec) + 1e-9 * static_cast<double>(ts.tv_nsec);
+}
+
+double time_set(void (*method)(const case_data&), const std::vector<case_data>& cases, int reps) {
+  const double t0 = thread_seconds();
+  for (int r = 0; r < reps; ++r)
+    for (const auto& c : cases) method(c);
+  return thread_seconds() - t0;
+}
+
+double interleaved_ratio(void (*a)(const case_data&), void (*b)(const case_data&), const std::vector<case_data>& cases,
+                         int rounds) {
+  // repetitions per round: about 2 ms of b
+  int reps = 1;
+  while (time_set(b, cases, reps) < 2e-3 && reps < (1 << 20)) reps *= 2;
+  std::vector<double> ratios;
+  for (int r = 0; r < rounds; ++r) {
+    double ta = 0;
+    double tb = 0;
+    if (r % 2 == 0) {
+      ta = time_set(a, cases, reps);
+      tb = time_set(b, cases, reps);
+    } else {
+      tb = time_set(b, cases, reps);
+      ta = time_set(a, cases, reps);
+    }
+    ratios.push_back(ta / tb);
+  }
+  std::sort(ratios.begin(), ratios.end());
+  return ratios[ratios.size() / 2];
+}
+
+void print_interleaved(int rounds) {
+  struct pair {
+    const char* a_name;
+    void (*a)(const case_data&);
+    const char* b_name;
+    void (*b)(const case_data&);
+    const char* target;
+  };
+  const std::vector<pair> pairs{
+      {"analyze", run_analyze, "svd", run_svd, "(<= 3)"},
+      {"elimination_int64", run_elimination_int64, "fullpivlu_kernel", run_fullpivlu, "(<= 2)"},
+      {"elimination_cpp_rational", run_elimination_rational, "elimination_int64", run_elimination_int64, "(>= 10)"},
+      {"echelon_cpp_rational", run_echelon<detail::big_rational>, "echelon_int64", run_echelon<rational>, ""},
+  };
+  std::printf("\nratio interleaved, median of %d alternating rounds of thread CPU time (target in brackets):\n",
+              rounds);
+  for (const char* set : {"textbook", "random7x20", "random7x30"})
+    for (const auto& p : pairs)
+      std::printf("summary: interleaved %-10s %-24s / %-18s %7.2f %s\n", set, p.a_name, p.b_name,
+                  interleaved_ratio(p.a, p.b, sets().at(set), rounds), p.target);
+}
+
 }  // namespace
 
 int main(int argc, char** argv) {
@@ -334,6 +400,7 @@ int main(int argc, char** argv) {
   ratio_reporter reporter;
   benchmark::RunSpecifiedBenchmarks(&reporter);
   reporter.print_summary();
+  print_interleaved(21);
   benchmark::Shutdown();
   return ok ? 0 : 1;
 }
