@@ -60,20 +60,23 @@ inline svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_
   }
   out.agrees = out.rank == exact_rank;
 
-  // |A v| / |v| per group, in plain loops (no temporaries)
+  // |A v| / |v| per group: plain loops over the non-zero exponents (a group in the classical
+  // form has rank + 1 of them), column by column, without temporaries
   for (const auto& g : groups) {
     if (static_cast<Eigen::Index>(g.exponents.size()) != cols) continue;
     double vv = 0.0;
-    for (const std::int64_t e : g.exponents) vv += static_cast<double>(e) * static_cast<double>(e);
-    if (vv == 0.0) continue;
-    double av = 0.0;
-    for (Eigen::Index i = 0; i < rows; ++i) {
-      double x = 0.0;
-      for (Eigen::Index j = 0; j < cols; ++j)
-        x += m(i, j) * static_cast<double>(g.exponents[static_cast<std::size_t>(j)]);
-      av += x * x;
+    double av[base_dimension_count] = {};
+    for (Eigen::Index j = 0; j < cols; ++j) {
+      const std::int64_t e = g.exponents[static_cast<std::size_t>(j)];
+      if (e == 0) continue;
+      const double x = static_cast<double>(e);
+      vv += x * x;
+      for (Eigen::Index i = 0; i < rows; ++i) av[i] += m(i, j) * x;
     }
-    out.max_residual = std::max(out.max_residual, std::sqrt(av) / std::sqrt(vv));
+    if (vv == 0.0) continue;
+    double aa = 0.0;
+    for (const double y : av) aa += y * y;
+    out.max_residual = std::max(out.max_residual, std::sqrt(aa) / std::sqrt(vv));
   }
   return out;
 }
