@@ -2,9 +2,10 @@
 # Build and run every nondim benchmark, then the instruction-count and compile-cost scripts,
 # and print the ratios at the end. Installs nothing: fails with a message if a tool is missing.
 #
-#   bench/run_all.sh [--build-dir DIR] [--min-time S] [--repetitions N] [--cells N] [--runs N]
+#   bench/run_all.sh [--build-dir DIR] [--jobs N] [--min-time S] [--repetitions N] [--cells N] [--runs N]
 #
 #   --build-dir    CMake build directory (default build/bench, ignored by git)
+#   --jobs         parallel compile jobs (default 1: the machine is shared)
 #   --min-time     --benchmark_min_time per benchmark, seconds (default 0.1)
 #   --repetitions  --benchmark_repetitions, medians are taken over them (default 5)
 #   --cells        cells for callgrind_compare.sh (default 100000)
@@ -17,6 +18,7 @@ set -euo pipefail
 here=$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)
 root=$(cd "$here/.." && pwd)
 build="$root/build/bench"
+jobs=1
 min_time=0.1
 reps=5
 cells=100000
@@ -24,11 +26,12 @@ runs=5
 while [[ $# -gt 0 ]]; do
   case "$1" in
     --build-dir) build=$(realpath -m "$2"); shift 2 ;;
+    --jobs) jobs=$2; shift 2 ;;
     --min-time) min_time=$2; shift 2 ;;
     --repetitions) reps=$2; shift 2 ;;
     --cells) cells=$2; shift 2 ;;
     --runs) runs=$2; shift 2 ;;
-    -h|--help) sed -n '2,16p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,17p' "$0"; exit 0 ;;
     *) echo "run_all.sh: unknown argument '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
@@ -66,7 +69,7 @@ broken=()
 benches=()
 for src in "$here"/*_bench.cpp; do
   name=$(basename "$src" .cpp)
-  if cmake --build "$build" --target "$name" -j2 >"$logs/build-$name.log" 2>&1; then
+  if cmake --build "$build" --target "$name" -j"$jobs" >"$logs/build-$name.log" 2>&1; then
     benches+=("$build/bench/$name")
   else
     broken+=("$name")

@@ -40,24 +40,22 @@ inline null_space_basis exact_null_space(const dimension_matrix& a,
     const std::size_t n = a.cols();
     std::vector<std::size_t> order(n);
     for (std::size_t j = 0; j < n; ++j) order[j] = j;
-    detail::exact_matrix<F> m = detail::dimension_columns<F>(a.columns(), order);
+    const detail::exact_matrix<F> m = detail::dimension_columns<F>(a.columns(), order);
+    const auto e = detail::fraction_free_echelon(m);
     null_space_basis out;
     out.multiprecision = !std::is_same_v<F, rational>;
-    out.pivots = detail::reduce_to_echelon(m);
+    out.pivots = e.pivots;
     out.rank = out.pivots.size();
     std::vector<bool> is_pivot(n, false);
     for (std::size_t p : out.pivots) is_pivot[p] = true;
-    std::vector<F> x(n);
+    out.vectors.reserve(n - out.rank);
     for (std::size_t c = 0; c < n; ++c) {
       if (is_pivot[c]) continue;
-      std::fill(x.begin(), x.end(), F(0));
-      x[c] = F(1);
-      for (std::size_t r = 0; r < out.rank; ++r) x[out.pivots[r]] = F(-m(r, c));
       try {
-        out.vectors.push_back(detail::primitive_integer_vector(std::span<const F>(x)));
-      } catch (const detail::integers_too_large& e) {
+        out.vectors.push_back(detail::echelon_null_vector(e, c, std::span<const std::size_t>(order), n));
+      } catch (const detail::integers_too_large& x) {
         throw analysis_error(detail::cat({"nondim: the null vector of column ", std::to_string(c + 1),
-                                          " needs an exponent beyond 64 bits (", e.example, ")"}));
+                                          " needs an exponent beyond 64 bits (", x.example, ")"}));
       }
     }
     return out;

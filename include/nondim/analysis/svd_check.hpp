@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <cmath>
 #include <cstddef>
+#include <cstdint>
 #include <limits>
 #include <vector>
 
@@ -59,13 +60,23 @@ inline svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_
   }
   out.agrees = out.rank == exact_rank;
 
+  // |A v| / |v| per group: plain loops over the non-zero exponents (a group in the classical
+  // form has rank + 1 of them), column by column, without temporaries
   for (const auto& g : groups) {
     if (static_cast<Eigen::Index>(g.exponents.size()) != cols) continue;
-    Eigen::VectorXd v(cols);
-    for (Eigen::Index j = 0; j < cols; ++j) v(j) = static_cast<double>(g.exponents[static_cast<std::size_t>(j)]);
-    const double norm = v.norm();
-    if (norm == 0.0) continue;
-    out.max_residual = std::max(out.max_residual, (m * v).norm() / norm);
+    double vv = 0.0;
+    double av[base_dimension_count] = {};
+    for (Eigen::Index j = 0; j < cols; ++j) {
+      const std::int64_t e = g.exponents[static_cast<std::size_t>(j)];
+      if (e == 0) continue;
+      const double x = static_cast<double>(e);
+      vv += x * x;
+      for (Eigen::Index i = 0; i < rows; ++i) av[i] += m(i, j) * x;
+    }
+    if (vv == 0.0) continue;
+    double aa = 0.0;
+    for (const double y : av) aa += y * y;
+    out.max_residual = std::max(out.max_residual, std::sqrt(aa) / std::sqrt(vv));
   }
   return out;
 }

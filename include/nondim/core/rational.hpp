@@ -2,6 +2,7 @@
 /// \file rational.hpp
 /// \brief Exact fractions with checked 64-bit arithmetic, usable in constant expressions.
 
+#include <bit>
 #include <compare>
 #include <cstdint>
 #include <limits>
@@ -50,10 +51,22 @@ constexpr std::int64_t checked_neg(std::int64_t a) {
 constexpr std::int64_t gcd_magnitude(std::int64_t a, std::int64_t b) {
   std::uint64_t x = a < 0 ? 0 - static_cast<std::uint64_t>(a) : static_cast<std::uint64_t>(a);
   std::uint64_t y = b < 0 ? 0 - static_cast<std::uint64_t>(b) : static_cast<std::uint64_t>(b);
-  while (y != 0) {
-    const std::uint64_t t = x % y;
-    x = y;
-    y = t;
+  // binary (Stein's) algorithm: shifts and subtractions instead of a 64-bit division per step
+  if (x == 0 || y == 0) {
+    x |= y;
+  } else {
+    const int shift = std::countr_zero(x | y);
+    x >>= std::countr_zero(x);
+    do {
+      y >>= std::countr_zero(y);
+      if (x > y) {
+        const std::uint64_t t = x;
+        x = y;
+        y = t;
+      }
+      y -= x;
+    } while (y != 0);
+    x <<= shift;
   }
   if (x > static_cast<std::uint64_t>(std::numeric_limits<std::int64_t>::max()))
     throw_overflow("nondim: rational gcd overflows 64 bits");
@@ -105,6 +118,7 @@ struct rational {
 
   friend constexpr rational operator-(const rational& a) { return {detail::checked_neg(a.num), a.den}; }
   friend constexpr rational operator+(const rational& a, const rational& b) {
+    if (a.den == 1 && b.den == 1) return rational(detail::checked_add(a.num, b.num));  // integers: no gcd
     // reduce by gcd of denominators first so intermediate values stay small
     const std::int64_t g = detail::gcd_magnitude(a.den, b.den);
     const std::int64_t bd = b.den / g;
@@ -113,6 +127,7 @@ struct rational {
             detail::checked_mul(a.den, bd)};
   }
   friend constexpr rational operator-(const rational& a, const rational& b) {
+    if (a.den == 1 && b.den == 1) return rational(detail::checked_sub(a.num, b.num));
     const std::int64_t g = detail::gcd_magnitude(a.den, b.den);
     const std::int64_t bd = b.den / g;
     const std::int64_t ad = a.den / g;
@@ -121,6 +136,7 @@ struct rational {
   }
   friend constexpr rational operator*(const rational& a, const rational& b) {
     if (a.num == 0 || b.num == 0) return {};
+    if (a.den == 1 && b.den == 1) return rational(detail::checked_mul(a.num, b.num));
     const std::int64_t g1 = detail::gcd_magnitude(a.num, b.den);
     const std::int64_t g2 = detail::gcd_magnitude(b.num, a.den);
     return {detail::checked_mul(a.num / g1, b.num / g2), detail::checked_mul(a.den / g2, b.den / g1)};

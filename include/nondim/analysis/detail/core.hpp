@@ -4,6 +4,7 @@
 /// checked int64 first, again in cpp_rational when that overflows.
 
 #include <algorithm>
+#include <array>
 #include <cstddef>
 #include <cstdint>
 #include <span>
@@ -86,7 +87,9 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
       if (std::find(given.begin(), given.end(), j) == given.end()) order.push_back(j);
   } else {
     std::vector<F> weight(n);
+    std::vector<std::size_t> bases(n);
     for (std::size_t j = 0; j < n; ++j) {
+      bases[j] = dims[j].base_count();
       F w = 0;
       for (std::size_t i = 0; i < base_dimension_count; ++i) {
         const F e = from_rational<F>(dims[j][i]);
@@ -97,16 +100,15 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     for (std::size_t j = 0; j < n; ++j)
       if (j != dependent) order.push_back(j);
     std::stable_sort(order.begin(), order.end(), [&](std::size_t a, std::size_t b) {
-      const std::size_t ca = dims[a].base_count();
-      const std::size_t cb = dims[b].base_count();
-      if (ca != cb) return ca < cb;
+      if (bases[a] != bases[b]) return bases[a] < bases[b];
       return weight[a] < weight[b];  // stable: input order breaks ties
     });
     order.push_back(dependent);
   }
 
-  exact_matrix<F> m = dimension_columns<F>(dims, order);
-  const std::vector<std::size_t> pivots = reduce_to_echelon(m);
+  const exact_matrix<F> m = dimension_columns<F>(dims, order);
+  const auto ech = fraction_free_echelon(m);
+  const std::vector<std::size_t>& pivots = ech.pivots;
   out.rank = pivots.size();
 
   if (!given.empty()) {
@@ -126,7 +128,7 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
       std::vector<F> used_e;
       for (std::size_t r = 0; r < k; ++r) {
         used.push_back(names[given[r]]);
-        used_e.push_back(m(r, k));
+        used_e.push_back(ratio(ech(r, k), ech.denominator));
       }
       const std::string& who = names[given[k]];
       throw analysis_error(cat({"nondim: the repeating variables must have independent dimensions, but that of '", who,
@@ -150,13 +152,10 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   for (std::size_t c = 0; c < n; ++c)
     if (!is_pivot[c]) free_columns.emplace_back(order[c], c);
   std::sort(free_columns.begin(), free_columns.end());
-  std::vector<F> x(n);
+  out.groups.reserve(free_columns.size());
   for (const auto& [head, c] : free_columns) {
-    std::fill(x.begin(), x.end(), F(0));
-    x[head] = F(1);
-    for (std::size_t r = 0; r < pivots.size(); ++r) x[order[pivots[r]]] = F(-m(r, c));
     try {
-      out.groups.push_back(primitive_integer_vector(std::span<const F>(x)));
+      out.groups.push_back(echelon_null_vector(ech, c, std::span<const std::size_t>(order), n));
     } catch (const integers_too_large& e) {
       throw analysis_error(cat({"nondim: the group of '", names[head], "' needs an exponent beyond 64 bits (",
                                 e.example, "); the exact answer cannot be given as int64 exponents"}),
@@ -166,7 +165,22 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   }
 
   // The dimensions spanned: the reduced form of the transpose, whose rows are a basis of
-  // the column space expressed over the base dimensions (explains rank deficiency).
+  // the column space expressed over the base dimensions (explains rank deficiency). When
+  // the rank equals the count of base dimensions present, the column space is spanned by
+  // those base dimensions and that reduced form is their unit rows, in order: no second
+  // elimination is needed.
+  std::vector<std::size_t> present;
+  for (std::size_t i = 0; i < base_dimension_count; ++i)
+    if (std::any_of(dims.begin(), dims.end(), [i](const dimension& d) { return !d[i].is_zero(); }))
+      present.push_back(i);
+  if (present.size() == out.rank) {
+    for (std::size_t i : present) {
+      std::array<rational, base_dimension_count> e{};
+      e[i] = 1;
+      out.spanning.emplace_back(e);
+    }
+    return out;
+  }
   exact_matrix<F> t(n, base_dimension_count);
   for (std::size_t j = 0; j < n; ++j)
     for (std::size_t i = 0; i < base_dimension_count; ++i) t(j, i) = from_rational<F>(dims[j][i]);
