@@ -1,6 +1,6 @@
 #!/bin/sh
 # Build the nondim program and run its demo (the README's first quick-start command).
-# Extra arguments go to `nondim demo` (e.g. --format markdown).
+# Extra arguments go to `nondim demo` (e.g. --help).
 set -eu
 cd "$(dirname "$0")/.."
 scripts/install-deps.sh
