@@ -102,7 +102,12 @@ void run_scale(const scale_args& args, std::ostream& out) {
     const file_variable& fv = f.variables[j];
     sp.add(similarity_variable{v.name, v.unit, v.factor, v.offset, fv.prototype, fv.model, v.dim});
   }
-  for (const auto& g : a.groups) sp.add_group(g.exponents);
+  // A group the catalog names is labelled so ("Fr^-2", "Re^-1"), as `nondim groups` names it.
+  for (const auto& g : a.groups)
+    sp.add_group(g.exponents, g.matches.empty()
+                                  ? std::string{}
+                                  : std::string(g.matches.front().symbol) +
+                                        detail::exponent_suffix(g.matches.front().power, text_form::ascii));
   sp.dependent = a.dependent;
   if (!args.priority.empty()) sp.priority = group_numbers(args.priority, a.groups.size());
 
