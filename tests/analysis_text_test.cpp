@@ -75,7 +75,8 @@ TEST_SUITE("analysis text") {
     CHECK(contains(u, "rank 3\n"));
     CHECK(contains(u, "repeating \u03c1, U, D (given)\n"));
     // F/(rho U^2 D^2) is a drag coefficient (White, Fluid Mechanics, ch. 5, from memory)
-    CHECK(contains(u, "\u03c01 = F\u00b7\u03c1\u207b\u00b9\u00b7U\u207b\u00b2\u00b7D\u207b\u00b2 = C_D (drag coefficient)\n"));
+    CHECK(contains(
+        u, "\u03c01 = F\u00b7\u03c1\u207b\u00b9\u00b7U\u207b\u00b2\u00b7D\u207b\u00b2 = C_D (drag coefficient)\n"));
     CHECK(contains(u, "isolated: none\n"));
     CHECK(contains(u, "SVD check: rank 3, agrees"));
 

@@ -17,8 +17,8 @@
 ///  - without a hint, a name listed for the factor's kind ("k_s" for the conductivity of a
 ///    solid) scores 2, a name listed for a more specific kind 1, for a more general kind 0
 ///    ("k" for the conductivity of a solid); a name listed only for other kinds of the same
-///    dimension ("k_s" where the fluid's conductivity is meant) is a contradiction. Failing an exact listing, the part of the name before its first `_`
-///    is tried the same way with score 1 ("rho_l" is a density);
+///    dimension ("k_s" where the fluid's conductivity is meant) is a contradiction. Failing an exact listing, the part
+///    of the name before its first `_` is tried the same way with score 1 ("rho_l" is a density);
 ///  - a match is `consistent` when no variable contradicts its factor.
 /// Matches are ordered consistent first, then by score, tier and catalog order.
 ///

@@ -38,7 +38,9 @@ inline std::string names_suffix(const pi_group& g, text_form form) {
   std::string s;
   for (std::size_t k = 0; k < g.matches.size(); ++k) {
     const auto& m = g.matches[k];
-    s.append(k == 0 ? " = " : k == 1 ? "; same form: " : ", ")
+    s.append(k == 0   ? " = "
+             : k == 1 ? "; same form: "
+                      : ", ")
         .append(m.symbol)
         .append(exponent_suffix(m.power, form))
         .append(" (")
@@ -128,7 +130,8 @@ inline std::string to_string(const analysis& a, text_form form = text_form::unic
 
   s.append(cat({"groups (", std::to_string(a.groups.size()), ")\n"}));
   for (std::size_t k = 0; k < a.groups.size(); ++k)
-    s.append(cat({"  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form), detail::names_suffix(a.groups[k], form), "\n"}));
+    s.append(cat({"  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form),
+                  detail::names_suffix(a.groups[k], form), "\n"}));
 
   if (a.isolated.empty()) {
     s.append("isolated: none\n");

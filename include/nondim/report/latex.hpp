@@ -82,8 +82,7 @@ inline std::string latex_symbol(std::string_view symbol) {
   const auto underscore = symbol.find('_');
   const std::string_view head = symbol.substr(0, underscore);
   std::string s = head == "eps" || head.size() == 1 ? latex_word(head) : "\\mathrm{" + latex_upright(head) + "}";
-  if (underscore != std::string_view::npos)
-    s += "_{\\mathrm{" + latex_upright(symbol.substr(underscore + 1)) + "}}";
+  if (underscore != std::string_view::npos) s += "_{\\mathrm{" + latex_upright(symbol.substr(underscore + 1)) + "}}";
   return s;
 }
 
