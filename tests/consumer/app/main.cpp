@@ -4,7 +4,10 @@
 #include <nondim/parse.hpp>
 #include <nondim/quantity.hpp>
 
+#include <array>
+#include <cmath>
 #include <cstdio>
+#include <vector>
 
 int main() {
   using namespace nondim;
@@ -47,5 +50,17 @@ int main() {
                        an.groups[1].text(text_form::ascii) == "mu*rho^-1*U^-1*D^-1" && an.svd.agrees &&
                        an.isolated.empty();
   std::printf("%s", to_string(an).c_str());
-  return (psi > 0.0087 && psi < 0.0088 && parsed && grouped) ? 0 : 1;
+  // the same basis at compile time from the argument types (pi_groups): the values agree
+  // with analyze()'s to the rounding of the products; scales(rho, U, D) makes q/(rho U^2)
+  // = 1/2 (the dynamic pressure over its scale; White, Viscous Fluid Flow, ch. 2, from memory)
+  constexpr auto F = 3.0 * units::N;
+  const std::array<double, 2> typed = pi_groups(F, rho, U, D, mu);
+  const std::vector<double> si{F.si(), rho.si(), U.si(), D.si(), mu.si()};
+  const std::vector<double> from_analysis = an.values(si);
+  const bool agree =
+      std::fabs(typed[0] / from_analysis[0] - 1.0) < 1e-15 && std::fabs(typed[1] / from_analysis[1] - 1.0) < 1e-15;
+  const double q_star = scales(rho, U, D).nondimensional(q);
+  const bool scaled = std::fabs(q_star - 0.5) < 1e-15;
+  std::printf("pi_groups %s analyze(); q* = %.3f\n", agree ? "agrees with" : "DISAGREES with", q_star);
+  return (psi > 0.0087 && psi < 0.0088 && parsed && grouped && agree && scaled) ? 0 : 1;
 }
