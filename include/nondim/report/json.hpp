@@ -9,11 +9,11 @@
 
 #include <cstddef>
 #include <string>
+#include <utility>
 #include <vector>
 
 #include "../analysis.hpp"
 #include "detail/json.hpp"
-#include "detail/names.hpp"
 #include "latex.hpp"
 
 namespace nondim {
@@ -44,8 +44,9 @@ inline json_value json_group(const pi_group& g) {
   for (std::size_t i = 0; i < g.exponents.size(); ++i)
     if (i != g.non_repeating) put(i);
   json_elements matches;
-  for (const auto& m : matches_of(g))
-    matches.emplace_back(json_members{{"name", m.name}, {"symbol", m.symbol}, {"power", json_exponent(m.power)}});
+  for (const auto& m : g.matches)
+    matches.emplace_back(json_members{
+        {"name", std::string(m.name)}, {"symbol", std::string(m.symbol)}, {"power", json_exponent(m.power)}});
   return json_members{{"exponents", std::move(exponents)},
                       {"text", g.text(text_form::ascii)},
                       {"latex", latex(g)},

@@ -131,7 +131,7 @@ inline std::string latex_report(const analysis& a, const report_options& o = {})
     s += "\\[ \\Pi_{" + std::to_string(k + 1) + "} = " + latex(a.groups[k]);
     // Only the best match goes into the equation: two entries that share a form (Nu and
     // Bi) are not equal to each other, so chaining them would state a falsehood.
-    const auto names = detail::matches_of(a.groups[k]);
+    const auto& names = a.groups[k].matches;
     if (!names.empty()) s += " = " + detail::latex_power(detail::latex_symbol(names[0].symbol), names[0].power);
     s += " \\]";
     if (!names.empty()) {

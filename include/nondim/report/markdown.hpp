@@ -9,6 +9,7 @@
 #include <vector>
 
 #include "../analysis.hpp"
+#include "../analysis/detail/cat.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"
 #include "options.hpp"
@@ -81,8 +82,9 @@ inline std::string markdown_report(const analysis& a, const report_options& o = 
   s += detail::markdown_row({"group", "expression", "recognised as"}) + detail::markdown_row({":--", ":--", ":--"});
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     std::string names;
-    for (const auto& m : detail::matches_of(a.groups[k]))
-      names += (names.empty() ? "" : "; ") + m.symbol + detail::exponent_suffix(m.power, form) + " (" + m.name + ")";
+    for (const auto& m : a.groups[k].matches)
+      names +=
+          detail::cat({names.empty() ? "" : "; ", m.symbol, detail::exponent_suffix(m.power, form), " (", m.name, ")"});
     s += detail::markdown_row({"\u03a0" + std::to_string(k + 1), detail::markdown_escape(a.groups[k].text(form)),
                                names.empty() ? "–" : detail::markdown_escape(names)});
   }

@@ -1,12 +1,11 @@
 #pragma once
 /// \file detail/names.hpp
-/// \brief Helpers shared by the views: names split into head and subscript, list
-/// formatting, and the named-group matches of a group in one shape for every view.
+/// \brief Helpers shared by the views: names split into head and subscript, one-line
+/// text and list formatting.
 
 #include <cstddef>
 #include <string>
 #include <string_view>
-#include <utility>
 #include <vector>
 
 #include "../../analysis.hpp"
@@ -42,29 +41,6 @@ inline std::string comma_list(const std::vector<std::string>& names, text_form f
   std::string s;
   for (std::size_t k = 0; k < names.size(); ++k) s += (k ? ", " : "") + display_name(names[k], form);
   return s;
-}
-
-/// A recognised named group, as the views show it: the group is `symbol^power`.
-struct match_view {
-  std::string name;        ///< "Reynolds number"
-  std::string symbol;      ///< "Re"
-  rational power{1};       ///< the group equals the named group to this power
-  bool ambiguous = false;  ///< another catalog entry matches the same group too
-};
-
-/// The named groups a group was recognised as: its `matches` (name, symbol, power, and
-/// `ambiguous` where the catalog gives it), in the catalog's order.
-template <class Group>
-std::vector<match_view> matches_of(const Group& g) {
-  std::vector<match_view> out;
-  if constexpr (requires { g.matches.begin(); }) {
-    for (const auto& m : g.matches) {
-      match_view v{std::string(m.name), std::string(m.symbol), rational{m.power}, false};
-      if constexpr (requires { static_cast<bool>(m.ambiguous); }) v.ambiguous = static_cast<bool>(m.ambiguous);
-      out.push_back(std::move(v));
-    }
-  }
-  return out;
 }
 
 }  // namespace nondim::detail
