@@ -31,9 +31,7 @@ int dispatch(int argc, const char* const* argv, std::ostream& out, std::ostream&
   commands.push_back(add_groups(app));
   commands.push_back(add_convert(app));
   commands.push_back(add_dim(app));
-#ifdef NONDIM_CLI_WITH_SIMILARITY
   commands.push_back(add_scale(app));
-#endif
   commands.push_back(add_demo(app));
 
   // An unknown first word would otherwise reach CLI11 as an unexpected positional.
