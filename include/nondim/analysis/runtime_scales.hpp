@@ -332,18 +332,18 @@ class runtime_scales {
 
   /// \brief `si_value` (of dimension `d`, in coherent SI units) over its reference scale.
   [[nodiscard]] double nondimensional(double si_value, const dimension& d) const {
-    return si_value / value_of(exponents_of(d));
+    return cell_nondimensional(si_value, 1.0, value_of(exponents_of(d)));
   }
   /// \brief `value` in unit `unit_text` over its reference scale (`nondimensional(120, "Pa")`).
   /// \throws scales_error for an absolute temperature unit (use `nondimensional_difference`).
   [[nodiscard]] double nondimensional(double value, std::string_view unit_text) const {
     const parsed_unit u = linear_unit(unit_text, "nondimensional");
-    return value * u.factor / value_of(exponents_of(u.dim));
+    return cell_nondimensional(value, u.factor, value_of(exponents_of(u.dim)));
   }
   /// \brief q over the reference scale of its dimension.
   template <dimension D, class Rep>
   [[nodiscard]] double nondimensional(const quantity<D, Rep>& q) const {
-    return static_cast<double>(q.si()) / value_of(exponents_of(D));
+    return cell_nondimensional(static_cast<double>(q.si()), 1.0, value_of(exponents_of(D)));
   }
   /// Refused: an absolute temperature is not a multiple of a temperature difference.
   template <class Rep>
@@ -355,17 +355,19 @@ class runtime_scales {
   }
 
   /// \brief The SI value of dimension `d` whose nondimensional value is `x`: x times its scale.
-  [[nodiscard]] double dimensional(double x, const dimension& d) const { return x * value_of(exponents_of(d)); }
+  [[nodiscard]] double dimensional(double x, const dimension& d) const {
+    return cell_dimensional(x, 1.0, value_of(exponents_of(d)));
+  }
   /// \brief The value, in unit `unit_text`, whose nondimensional value is `x`.
   /// \throws scales_error for an absolute temperature unit (use `dimensional_point`).
   [[nodiscard]] double dimensional(double x, std::string_view unit_text) const {
     const parsed_unit u = linear_unit(unit_text, "dimensional");
-    return x * value_of(exponents_of(u.dim)) / u.factor;
+    return cell_dimensional(x, u.factor, value_of(exponents_of(u.dim)));
   }
   /// \brief The quantity of dimension D whose nondimensional value is `x`.
   template <dimension D>
   [[nodiscard]] quantity<D> dimensional(double x) const {
-    return quantity<D>::from_si(x * value_of(exponents_of(D)));
+    return quantity<D>::from_si(cell_dimensional(x, 1.0, value_of(exponents_of(D))));
   }
 
   // ---- fields: arrays of cell values, converted in one call ------------------------------
@@ -376,27 +378,27 @@ class runtime_scales {
   void nondimensional(std::span<const double> si_values, const dimension& d, std::span<double> out) const {
     check_sizes(si_values.size(), out.size());
     const double s = value_of(exponents_of(d));
-    for (std::size_t c = 0; c < out.size(); ++c) out[c] = si_values[c] / s;
+    for (std::size_t c = 0; c < out.size(); ++c) out[c] = cell_nondimensional(si_values[c], 1.0, s);
   }
   /// \brief The same for cell values in unit `unit_text`; each cell as `nondimensional(values[c], unit_text)`.
   void nondimensional(std::span<const double> values, std::string_view unit_text, std::span<double> out) const {
     check_sizes(values.size(), out.size());
     const parsed_unit u = linear_unit(unit_text, "nondimensional");
     const double s = value_of(exponents_of(u.dim));
-    for (std::size_t c = 0; c < out.size(); ++c) out[c] = values[c] * u.factor / s;
+    for (std::size_t c = 0; c < out.size(); ++c) out[c] = cell_nondimensional(values[c], u.factor, s);
   }
   /// \brief `out[c] = x[c] * scale` in SI units of dimension `d`; `out` may be `x` itself.
   void dimensional(std::span<const double> x, const dimension& d, std::span<double> out) const {
     check_sizes(x.size(), out.size());
     const double s = value_of(exponents_of(d));
-    for (std::size_t c = 0; c < out.size(); ++c) out[c] = x[c] * s;
+    for (std::size_t c = 0; c < out.size(); ++c) out[c] = cell_dimensional(x[c], 1.0, s);
   }
   /// \brief The same in unit `unit_text`; each cell as `dimensional(x[c], unit_text)`.
   void dimensional(std::span<const double> x, std::string_view unit_text, std::span<double> out) const {
     check_sizes(x.size(), out.size());
     const parsed_unit u = linear_unit(unit_text, "dimensional");
     const double s = value_of(exponents_of(u.dim));
-    for (std::size_t c = 0; c < out.size(); ++c) out[c] = x[c] * s / u.factor;
+    for (std::size_t c = 0; c < out.size(); ++c) out[c] = cell_dimensional(x[c], u.factor, s);
   }
 
   // ---- temperatures: only from differences ---------------------------------------------
@@ -408,7 +410,7 @@ class runtime_scales {
   ///         references span no temperature.
   [[nodiscard]] double nondimensional_difference(double t, double t_ref, std::string_view unit_text) const {
     const parsed_unit u = temperature_unit(unit_text);
-    return ((t * u.factor + u.offset) - (t_ref * u.factor + u.offset)) / temperature_scale();
+    return cell_theta(t, u, si_reading(t_ref, u), temperature_scale());
   }
   /// \brief theta = (T - T_ref) / dT for absolute temperatures.
   template <class Rep>
@@ -422,14 +424,14 @@ class runtime_scales {
     check_sizes(t.size(), out.size());
     const parsed_unit u = temperature_unit(unit_text);
     const double dt = temperature_scale();
-    const double ref = t_ref * u.factor + u.offset;
-    for (std::size_t c = 0; c < out.size(); ++c) out[c] = ((t[c] * u.factor + u.offset) - ref) / dt;
+    const double ref = si_reading(t_ref, u);
+    for (std::size_t c = 0; c < out.size(); ++c) out[c] = cell_theta(t[c], u, ref, dt);
   }
   /// \brief The reading, in unit `unit_text`, of T_ref + theta dT (the inverse of
   /// `nondimensional_difference`).
   [[nodiscard]] double dimensional_point(double theta, double t_ref, std::string_view unit_text) const {
     const parsed_unit u = temperature_unit(unit_text);
-    return ((t_ref * u.factor + u.offset) + theta * temperature_scale() - u.offset) / u.factor;
+    return cell_reading(theta, u, si_reading(t_ref, u), temperature_scale());
   }
   /// \brief A field: `out[c]` is the reading of T_ref + theta[c] dT in unit `unit_text`;
   /// `out` may be `theta` itself. Each cell as `dimensional_point(theta[c], t_ref, unit_text)`.
@@ -438,8 +440,8 @@ class runtime_scales {
     check_sizes(theta.size(), out.size());
     const parsed_unit u = temperature_unit(unit_text);
     const double dt = temperature_scale();
-    const double ref = t_ref * u.factor + u.offset;
-    for (std::size_t c = 0; c < out.size(); ++c) out[c] = (ref + theta[c] * dt - u.offset) / u.factor;
+    const double ref = si_reading(t_ref, u);
+    for (std::size_t c = 0; c < out.size(); ++c) out[c] = cell_reading(theta[c], u, ref, dt);
   }
   /// \brief T_ref + theta dT as an absolute temperature.
   template <class Rep>
@@ -448,6 +450,25 @@ class runtime_scales {
   }
 
  private:
+  // ---- the per-cell formulas, each written once: a field's cell and the single value
+  // are the same double. `factor` is the unit's size in SI units (1 for SI values, where
+  // multiplying or dividing by it is exact).
+
+  /// A value in a unit of `factor` over the scale `s`.
+  static double cell_nondimensional(double value, double factor, double s) noexcept { return value * factor / s; }
+  /// x times the scale `s`, in a unit of `factor`.
+  static double cell_dimensional(double x, double factor, double s) noexcept { return x * s / factor; }
+  /// A reading in unit `u` as an absolute temperature in K.
+  static double si_reading(double t, const parsed_unit& u) noexcept { return t * u.factor + u.offset; }
+  /// theta of the reading `t` in unit `u`, for the reference `ref` (in K) and the scale `dt`.
+  static double cell_theta(double t, const parsed_unit& u, double ref, double dt) noexcept {
+    return (si_reading(t, u) - ref) / dt;
+  }
+  /// The reading in unit `u` of ref + theta dt (`ref` in K).
+  static double cell_reading(double theta, const parsed_unit& u, double ref, double dt) noexcept {
+    return (ref + theta * dt - u.offset) / u.factor;
+  }
+
   static std::string strip_prefix(std::string_view what) {
     constexpr std::string_view prefix = "nondim: ";
     if (what.substr(0, prefix.size()) == prefix) what.remove_prefix(prefix.size());
