@@ -1,19 +1,18 @@
 // libFuzzer target: the whole `nondim` program in-process (tools/nondim/run.cpp) on a command
 // line decoded from bytes: the arguments are the '\0'-separated pieces (at most 24). The
-// program runs in a scratch directory holding two problem files (problem.toml, scale.toml) so
-// that `--file` and `scale` reach the analysis and the planner. The exit status must be 0 or
-// 2, never 1 (an internal fault) nor a crash; status 2 comes with one message beginning
-// "nondim: ".
+// program runs in a scratch directory holding a copy of the program tests' problem files
+// (tests/cli/problems, NONDIM_CLI_PROBLEMS_DIR) so that `--file` and `scale` reach the
+// analysis, the planner and the loader's errors. The exit status must be 0 or 2, never 1 (an
+// internal fault) nor a crash; status 2 comes with one message beginning "nondim: ".
 #include <unistd.h>
 
 #include <cstddef>
 #include <cstdint>
+#include <cstdio>
 #include <cstdlib>
 #include <filesystem>
-#include <fstream>
 #include <sstream>
 #include <string>
-#include <string_view>
 #include <system_error>
 #include <vector>
 
@@ -23,60 +22,6 @@
 namespace {
 
 using nondim_fuzz::require;
-
-// Drag on a towed body (the variables of White, 7th ed., section 5.3) with values for `scale`.
-constexpr std::string_view problem_toml = R"(title = "Drag"
-dependent = "F"
-repeating = ["rho", "U", "D"]
-[[variable]]
-name = "F"
-unit = "N"
-[[variable]]
-name = "rho"
-unit = "kg/m^3"
-prototype = 1025.0
-model = 998.0
-[[variable]]
-name = "U"
-unit = "kn"
-prototype = 6.0
-[[variable]]
-name = "D"
-unit = "cm"
-prototype = 30.0
-model = 10.0
-[[variable]]
-name = "mu"
-unit = "Pa*s"
-prototype = 1.08e-3
-model = 1.0e-3
-)";
-
-// Ship model: Froude and Reynolds cannot both match in the same water.
-constexpr std::string_view scale_toml = R"(dependent = "F"
-[[variable]]
-name = "F"
-unit = "N"
-[[variable]]
-name = "L"
-unit = "m"
-prototype = 100.0
-model = 4.0
-[[variable]]
-name = "U"
-unit = "m/s"
-prototype = 10.0
-[[variable]]
-name = "g"
-unit = "m/s^2"
-prototype = 9.81
-model = 9.81
-[[variable]]
-name = "nu"
-unit = "m^2/s"
-prototype = 1.0e-6
-model = 1.0e-6
-)";
 
 }  // namespace
 
@@ -99,8 +44,12 @@ extern "C" int LLVMFuzzerInitialize(int* argc, char*** argv) {
     std::error_code ec;
     std::filesystem::remove_all(dir, ec);
   });
-  std::ofstream("problem.toml") << problem_toml;
-  std::ofstream("scale.toml") << scale_toml;
+  std::error_code ec;
+  std::filesystem::copy(NONDIM_CLI_PROBLEMS_DIR, dir, ec);
+  if (ec) {
+    std::fprintf(stderr, "cannot copy the problem files of %s: %s\n", NONDIM_CLI_PROBLEMS_DIR, ec.message().c_str());
+    std::abort();
+  }
   return 0;
 }
 
