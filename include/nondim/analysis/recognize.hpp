@@ -185,6 +185,22 @@ constexpr std::array<std::uint64_t, quantity_kind_count> make_kind_hashes() {
 }
 inline constexpr auto kind_hashes = make_kind_hashes();
 
+/// The kinds other than `unspecified`, ordered by the hash of their dimension: the kinds of
+/// one dimension are found by a binary search instead of a scan of all of them.
+constexpr std::array<std::uint8_t, quantity_kind_count - 1> make_kinds_by_hash() {
+  std::array<std::uint8_t, quantity_kind_count - 1> out{};
+  for (std::size_t i = 1; i < quantity_kind_count; ++i) {
+    std::size_t at = i - 1;  // insertion sort, stable: kinds of one hash stay in their order
+    while (at > 0 && kind_hashes[out[at - 1]] > kind_hashes[i]) {
+      out[at] = out[at - 1];
+      --at;
+    }
+    out[at] = static_cast<std::uint8_t>(i);
+  }
+  return out;
+}
+inline constexpr auto kinds_by_hash = make_kinds_by_hash();
+
 constexpr std::uint64_t kind_bit(quantity_kind k) noexcept {
   return std::uint64_t{1} << static_cast<unsigned>(k);
 }
@@ -256,8 +272,11 @@ inline name_profile profile_of(const group_variable& v, std::uint64_t dim_hash) 
   const std::size_t underscore = v.name.find('_');
   const std::string_view base =
       underscore == std::string_view::npos || underscore == 0 ? std::string_view{} : v.name.substr(0, underscore);
-  for (std::size_t i = 1; i < quantity_kind_count; ++i) {
-    if (kind_hashes[i] != dim_hash || !(quantity_kinds[i].dim == v.dim)) continue;
+  const auto* k = std::lower_bound(kinds_by_hash.begin(), kinds_by_hash.end(), dim_hash,
+                                   [](std::uint8_t kind, std::uint64_t h) { return kind_hashes[kind] < h; });
+  for (; k != kinds_by_hash.end() && kind_hashes[*k] == dim_hash; ++k) {
+    const std::size_t i = *k;
+    if (!(quantity_kinds[i].dim == v.dim)) continue;
     const auto bit = kind_bit(static_cast<quantity_kind>(i));
     if (kind_has_name(i, v.name)) p.exact |= bit;
     if (!base.empty() && kind_has_name(i, base)) p.base |= bit;

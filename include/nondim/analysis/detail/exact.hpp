@@ -125,6 +125,41 @@ inline bool is_unit(const big_integer& x) {
   return x == 1 || x == -1;
 }
 
+/// `x[k] = p * x[k] - q * y[k]` for k < n, returning a bound on the magnitudes of the new
+/// entries (their bitwise or). In int64 the loop has no branch: overflow is gathered and
+/// thrown (`rational_overflow`) once, after the row.
+inline std::uint64_t combine_rows(std::int64_t p, std::int64_t* x, std::int64_t q, const std::int64_t* y,
+                                  std::size_t n) {
+  bool overflow = false;
+  std::uint64_t bound = 0;
+  for (std::size_t k = 0; k < n; ++k) {
+    std::int64_t a{};
+    std::int64_t b{};
+    overflow |= __builtin_mul_overflow(p, x[k], &a);
+    overflow |= __builtin_mul_overflow(q, y[k], &b);
+    overflow |= __builtin_sub_overflow(a, b, &x[k]);
+    bound |= x[k] < 0 ? 0 - static_cast<std::uint64_t>(x[k]) : static_cast<std::uint64_t>(x[k]);
+  }
+  if (overflow) throw_overflow("nondim: the exact elimination overflows 64 bits");
+  return bound;
+}
+inline std::uint64_t combine_rows(const big_integer& p, big_integer* x, const big_integer& q, const big_integer* y,
+                                  std::size_t n) {
+  for (std::size_t k = 0; k < n; ++k)
+    if (!x[k].is_zero() || !y[k].is_zero()) x[k] = p * x[k] - q * y[k];
+  return std::numeric_limits<std::uint64_t>::max();  // no bound: always divide out the gcd
+}
+
+/// Divides the row `x` (n entries) by the gcd of its entries.
+template <class I>
+void make_primitive(I* x, std::size_t n) {
+  I g = 0;
+  for (std::size_t k = 0; k < n && !is_unit(g); ++k)
+    if (!is_zero(x[k])) g = integer_gcd(g, x[k]);
+  if (is_zero(g) || is_unit(g)) return;
+  for (std::size_t k = 0; k < n; ++k) x[k] /= g;
+}
+
 /// Row `r` of `m` as integers: the entries times the lcm of their denominators.
 inline void integer_row(const exact_matrix<rational>& m, std::size_t r, std::int64_t* out) {
   std::int64_t l = 1;
@@ -167,14 +202,14 @@ struct integer_echelon {
 ///
 /// The reduced form is unique, so neither the pivot chosen in a column nor the way the
 /// rows are combined changes the result. The elimination is fraction-free: each row is kept
-/// as integers (the rational row times a factor), a row is cleared with
-/// `p * row - q * pivot_row` and divided by the gcd of its entries (which stops at the first
-/// 1), and at the end every row is brought to the lcm of the pivots. Against combining
-/// rational entries this saves the gcds of every entry operation. The entries then are
-/// minors of the matrix up to a common factor, as small as the reduced form allows. The
-/// first non-zero entry of a column is the pivot; zero entries are skipped (dimension
-/// matrices are sparse). With F = rational every operation is checked in int64 and throws
-/// `rational_overflow`; with F = cpp_rational the integers are cpp_int, the same steps.
+/// as integers (the rational row times a factor) and cleared with `p * row - q * pivot_row`;
+/// a row is divided by the gcd of its entries when one reaches 2^31 (cpp_int: always),
+/// every row once more at the end, and then every row is brought to the lcm of the pivots.
+/// Against combining rational entries this saves the gcds of every entry operation, and in
+/// int64 the row update is a loop without branches. The result is the reduced form with
+/// the smallest common denominator, whatever was divided out on the way. The first non-zero
+/// entry of a column is the pivot. With F = rational every operation is checked in int64 and
+/// throws `rational_overflow`; with F = cpp_rational the integers are cpp_int, the same steps.
 template <class F>
 integer_echelon<typename row_integer<F>::type> fraction_free_echelon(const exact_matrix<F>& m) {
   using I = typename row_integer<F>::type;
@@ -196,27 +231,22 @@ integer_echelon<typename row_integer<F>::type> fraction_free_echelon(const exact
     const I pivot = e(r, c);
     for (std::size_t i = 0; i < rows; ++i) {
       if (i == r || is_zero(e(i, c))) continue;
-      const I q = e(i, c);
-      I g = 0;
-      for (std::size_t k = 0; k < cols; ++k) {
-        if (k == c) {
-          e(i, k) = 0;
-          continue;
-        }
-        if (is_zero(e(i, k)) && is_zero(e(r, k))) continue;
-        e(i, k) = combine(pivot, e(i, k), q, e(r, k));
-        if (!is_unit(g)) g = integer_gcd(g, e(i, k));
-      }
-      if (!is_zero(g) && !is_unit(g))
-        for (std::size_t k = 0; k < cols; ++k) e(i, k) /= g;
+      // a * row_i - b * row_r with a / b = pivot / e(i, c) in lowest terms
+      const I g = integer_gcd(pivot, e(i, c));
+      const I a = is_unit(g) ? pivot : I(pivot / g);
+      const I b = is_unit(g) ? e(i, c) : I(e(i, c) / g);
+      // A row's gcd is divided out only once an entry reaches 2^31 (and at the end): while
+      // every entry is below 2^31, no product of the next step can overflow 64 bits.
+      if (combine_rows(a, &e(i, 0), b, &e(r, 0), cols) >= (std::uint64_t{1} << 31U)) make_primitive(&e(i, 0), cols);
     }
     e.pivots.push_back(c);
     ++r;
   }
 
   // one denominator: the lcm of the pivots' magnitudes; row i is scaled by it / its pivot
-  // (each row is primitive here, so its pivot is the lcm of its reduced denominators and
-  // the common one divides the determinant of the pivot columns)
+  // (each row is made primitive first, so its pivot is the lcm of its reduced denominators
+  // and the common one divides the determinant of the pivot columns)
+  for (std::size_t i = 0; i < r; ++i) make_primitive(&e(i, 0), cols);
   I d = 1;
   for (std::size_t i = 0; i < r; ++i) {
     const I& pv = e(i, e.pivots[i]);
