@@ -85,7 +85,7 @@ inline bool exactly_dimensionless(const std::vector<nondim::dimension>& dims, co
 using expected_group = std::map<std::string, std::int64_t>;
 
 inline void check_group(const nondim::pi_group& g, const expected_group& want) {
-  for (const auto& name : g.variables) {
+  for (const auto& name : g.variables()) {
     const auto it = want.find(name);
     const std::int64_t e = it == want.end() ? 0 : it->second;
     INFO("variable " << name << " in " << g.text(nondim::text_form::ascii));
@@ -94,7 +94,7 @@ inline void check_group(const nondim::pi_group& g, const expected_group& want) {
   for (const auto& entry : want) {  // no structured binding: Clang 14 cannot capture one in INFO
     const std::string& name = entry.first;
     INFO("expected variable " << name);
-    CHECK(std::find(g.variables.begin(), g.variables.end(), name) != g.variables.end());
+    CHECK(std::find(g.variables().begin(), g.variables().end(), name) != g.variables().end());
   }
 }
 

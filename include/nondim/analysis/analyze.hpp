@@ -9,6 +9,7 @@
 
 #include <algorithm>
 #include <cstddef>
+#include <memory>
 #include <string>
 #include <vector>
 
@@ -161,7 +162,9 @@ inline analysis classical_analysis(const problem& p, const options& o) {
   a.multiprecision = x.multiprecision;
   a.form = basis::classical;
   for (std::size_t r : x.repeating) a.repeating.push_back(names[r]);
-  for (std::size_t k = 0; k < x.groups.size(); ++k) a.groups.push_back(pi_group{x.groups[k], names, x.heads[k], {}});
+  const auto shared_names = std::make_shared<const std::vector<std::string>>(names);
+  a.groups.reserve(x.groups.size());
+  for (std::size_t k = 0; k < x.groups.size(); ++k) a.groups.emplace_back(x.groups[k], shared_names, x.heads[k]);
 
   std::vector<bool> repeating(n, false);
   for (std::size_t r : x.repeating) repeating[r] = true;

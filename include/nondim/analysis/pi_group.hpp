@@ -6,9 +6,11 @@
 #include <cmath>
 #include <cstddef>
 #include <cstdint>
+#include <memory>
 #include <span>
 #include <string>
 #include <string_view>
+#include <utility>
 #include <vector>
 
 #include "../core/format.hpp"
@@ -53,17 +55,29 @@ inline double apply_factor(double r, double x, std::int64_t e) noexcept {
 /// with gcd 1.
 struct pi_group {
   std::vector<std::int64_t> exponents;  ///< aligned with the problem's variables
-  std::vector<std::string> variables;   ///< the problem's variable names, aligned with `exponents`
   std::size_t non_repeating = 0;        ///< index of the group's non-repeating variable (written first)
   /// Catalog entries the group matches, best first (see recognize.hpp); filled by analyze()
   /// in both bases. Matches that a variable's conventional name contradicts are left out
   /// (`L/D` is no Knudsen number when `L` is a length); `recognize()` lists them all.
   std::vector<group_match> matches;
 
+  pi_group() = default;
+  /// `names`: the problem's variable names, aligned with `exponents`; the groups of one
+  /// analysis share one list (a copy per group was most of the cost of building the result).
+  pi_group(std::vector<std::int64_t> exponents_, std::shared_ptr<const std::vector<std::string>> names,
+           std::size_t non_repeating_)
+      : exponents(std::move(exponents_)), non_repeating(non_repeating_), names_(std::move(names)) {}
+
+  /// \brief The problem's variable names, aligned with `exponents`.
+  [[nodiscard]] const std::vector<std::string>& variables() const noexcept {
+    static const std::vector<std::string> none;
+    return names_ ? *names_ : none;
+  }
+
   /// \brief The exponent of `variable`; 0 where absent (not in the group, or not in the problem).
   [[nodiscard]] rational exponent(std::string_view variable) const {
-    for (std::size_t i = 0; i < variables.size() && i < exponents.size(); ++i)
-      if (variables[i] == variable) return rational{exponents[i]};
+    for (std::size_t i = 0; i < variables().size() && i < exponents.size(); ++i)
+      if (variables()[i] == variable) return rational{exponents[i]};
     return rational{0};
   }
 
@@ -75,7 +89,7 @@ struct pi_group {
     const auto put = [&](std::size_t i) {
       if (exponents[i] == 0) return;
       if (!s.empty()) s += form == text_form::unicode ? "\u00b7" : "*";
-      s += display_name(variables[i], form);
+      s += display_name(variables()[i], form);
       s += detail::exponent_suffix(rational{exponents[i]}, form);
     };
     if (non_repeating < exponents.size()) put(non_repeating);
@@ -113,14 +127,14 @@ struct pi_group {
     double r = 1.0;
     for (std::size_t i = 0; i < exponents.size(); ++i) {
       if (exponents[i] == 0) continue;
-      const auto it = si_values.find(variables[i]);
+      const auto it = si_values.find(variables()[i]);
       if (it == si_values.end())
         throw analysis_error(
-            detail::cat({"nondim: no value for variable '", variables[i], "' of the group ", text(text_form::ascii)}),
-            variables[i]);
+            detail::cat({"nondim: no value for variable '", variables()[i], "' of the group ", text(text_form::ascii)}),
+            variables()[i]);
       r = detail::apply_factor(r, static_cast<double>(it->second), exponents[i]);
     }
-    check_result(r, [&](std::size_t i) { return static_cast<double>(si_values.find(variables[i])->second); });
+    check_result(r, [&](std::size_t i) { return static_cast<double>(si_values.find(variables()[i])->second); });
     return r;
   }
 
@@ -141,9 +155,9 @@ struct pi_group {
     for (std::size_t i = 0; i < exponents.size(); ++i)
       if (exponents[i] != 0 && columns[i].size() != out.size())
         throw analysis_error(
-            detail::cat({"nondim: the column of variable '", variables[i], "' has ", std::to_string(columns[i].size()),
-                         " cells, the output ", std::to_string(out.size())}),
-            variables[i]);
+            detail::cat({"nondim: the column of variable '", variables()[i], "' has ",
+                         std::to_string(columns[i].size()), " cells, the output ", std::to_string(out.size())}),
+            variables()[i]);
     for (std::size_t c = 0; c < out.size(); ++c) {
       double r = 1.0;
       for (std::size_t i = 0; i < exponents.size(); ++i)
@@ -155,9 +169,15 @@ struct pi_group {
     }
   }
 
-  friend bool operator==(const pi_group&, const pi_group&) = default;
+  /// Equal groups: the same exponents over the same names, written the same way, with the same matches.
+  friend bool operator==(const pi_group& a, const pi_group& b) {
+    return a.exponents == b.exponents && a.non_repeating == b.non_repeating && a.matches == b.matches &&
+           (a.names_ == b.names_ || a.variables() == b.variables());
+  }
 
  private:
+  std::shared_ptr<const std::vector<std::string>> names_;
+
   /// Throws when `r`, the group's value from the values `x(i)`, comes from a value that is
   /// no number (NaN, infinite, or 0 raised to a negative power), or overflows a double.
   /// Infinite values can give 0 (1/inf), so a zero result is examined too; a zero from a
@@ -176,9 +196,9 @@ struct pi_group {
                          : v == 0.0 && exponents[i] < 0 ? " is 0, and the group divides by it"
                                                         : nullptr;
       if (what != nullptr)
-        throw analysis_error(detail::cat({"nondim: the value of '", variables[i], "'", where, what, " (group ",
+        throw analysis_error(detail::cat({"nondim: the value of '", variables()[i], "'", where, what, " (group ",
                                           text(text_form::ascii), ")"}),
-                             variables[i]);
+                             variables()[i]);
     }
     if (!std::isfinite(r))
       throw analysis_error(detail::cat({"nondim: the value of the group ", text(text_form::ascii), where,

@@ -37,7 +37,7 @@ namespace detail {
 /// problem a person writes) live on the stack: no allocation, the same Jacobi rotations.
 template <class Matrix>
 void singular_values_into(const Matrix& m, std::vector<double>& out) {
-  constexpr Eigen::Index small_columns = 16;
+  constexpr Eigen::Index small_columns = 32;
   const auto take = [&out](const auto& s) { out.assign(s.data(), s.data() + s.size()); };
   if (m.cols() <= small_columns) {
     using small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, base_dimension_count, small_columns>;

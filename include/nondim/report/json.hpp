@@ -37,8 +37,8 @@ inline json_value json_group(const pi_group& g) {
   json_members exponents;
   // the non-repeating variable first, then the problem's order: as the text form reads
   const auto put = [&](std::size_t i) {
-    if (i < g.exponents.size() && i < g.variables.size() && g.exponents[i] != 0)
-      exponents.emplace_back(g.variables[i], json_value(g.exponents[i]));
+    if (i < g.exponents.size() && i < g.variables().size() && g.exponents[i] != 0)
+      exponents.emplace_back(g.variables()[i], json_value(g.exponents[i]));
   };
   put(g.non_repeating);
   for (std::size_t i = 0; i < g.exponents.size(); ++i)

@@ -109,10 +109,10 @@ inline std::string latex(const pi_group& g) {
     if (e == 0) return;
     std::string& side = e > 0 ? num : den;
     if (!side.empty()) side += " ";
-    side += detail::latex_power(latex_name(g.variables[i]), rational{e > 0 ? e : -e});
+    side += detail::latex_power(latex_name(g.variables()[i]), rational{e > 0 ? e : -e});
   };
   if (g.non_repeating < g.exponents.size()) put(g.non_repeating);
-  for (std::size_t i = 0; i < g.exponents.size() && i < g.variables.size(); ++i)
+  for (std::size_t i = 0; i < g.exponents.size() && i < g.variables().size(); ++i)
     if (i != g.non_repeating) put(i);
   if (den.empty()) return num.empty() ? "1" : num;
   return "\\frac{" + (num.empty() ? std::string("1") : num) + "}{" + den + "}";
