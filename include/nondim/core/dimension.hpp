@@ -48,7 +48,14 @@ struct dimension {
   }
   [[nodiscard]] constexpr rational operator[](base_dimension b) const { return (*this)[static_cast<std::size_t>(b)]; }
 
-  [[nodiscard]] constexpr bool is_dimensionless() const noexcept { return *this == dimension{}; }
+  /// A loop over the numerators (a zero rational is 0/1), not `*this == dimension{}`: it is
+  /// evaluated in the constraints of every quantity constructor and conversion.
+  [[nodiscard]] constexpr bool is_dimensionless() const noexcept {
+    const rational* x = exponents.data();
+    for (std::size_t i = 0; i < base_dimension_count; ++i)
+      if (x[i].num != 0) return false;
+    return true;
+  }
   /// Number of base dimensions with a non-zero exponent.
   [[nodiscard]] constexpr std::size_t base_count() const noexcept {
     std::size_t c = 0;
@@ -56,7 +63,16 @@ struct dimension {
     return c;
   }
 
-  friend constexpr bool operator==(const dimension&, const dimension&) noexcept = default;
+  /// Written out, not defaulted: the defaulted form compares the arrays through
+  /// `std::equal`, whose constant evaluation cost Clang 14 about a million instructions per
+  /// comparison, and every `requires(D1 != D2)` of the quantity operators is one.
+  friend constexpr bool operator==(const dimension& a, const dimension& b) noexcept {
+    const rational* x = a.exponents.data();
+    const rational* y = b.exponents.data();
+    for (std::size_t i = 0; i < base_dimension_count; ++i)
+      if (x[i].num != y[i].num || x[i].den != y[i].den) return false;
+    return true;
+  }
 
   friend constexpr dimension operator*(const dimension& a, const dimension& b) {
     const auto& x = a.exponents;
