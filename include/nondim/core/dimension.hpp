@@ -48,12 +48,13 @@ struct dimension {
   }
   [[nodiscard]] constexpr rational operator[](base_dimension b) const { return (*this)[static_cast<std::size_t>(b)]; }
 
-  /// A loop over the numerators (a zero rational is 0/1), not `*this == dimension{}`: it is
-  /// evaluated in the constraints of every quantity constructor and conversion.
+  /// A loop over the exponents, the same test as `*this == dimension{}` (every one 0/1)
+  /// without building one: it is evaluated in the constraints of every quantity
+  /// constructor and conversion.
   [[nodiscard]] constexpr bool is_dimensionless() const noexcept {
     const rational* x = exponents.data();
     for (std::size_t i = 0; i < base_dimension_count; ++i)
-      if (x[i].num != 0) return false;
+      if (x[i].num != 0 || x[i].den != 1) return false;
     return true;
   }
   /// Number of base dimensions with a non-zero exponent.
@@ -63,9 +64,9 @@ struct dimension {
     return c;
   }
 
-  /// Written out, not defaulted: the defaulted form compares the arrays through
-  /// `std::equal`, whose constant evaluation cost Clang 14 about a million instructions per
-  /// comparison, and every `requires(D1 != D2)` of the quantity operators is one.
+  /// Written out, not defaulted: the defaulted form goes through `std::array`'s `==` and
+  /// `std::equal`, slower to evaluate as a constant, and every `requires(D1 != D2)` of the
+  /// quantity operators and every `units::` constant's table check is one.
   friend constexpr bool operator==(const dimension& a, const dimension& b) noexcept {
     const rational* x = a.exponents.data();
     const rational* y = b.exponents.data();
