@@ -48,7 +48,15 @@ struct dimension {
   }
   [[nodiscard]] constexpr rational operator[](base_dimension b) const { return (*this)[static_cast<std::size_t>(b)]; }
 
-  [[nodiscard]] constexpr bool is_dimensionless() const noexcept { return *this == dimension{}; }
+  /// A loop over the exponents, the same test as `*this == dimension{}` (every one 0/1)
+  /// without building one: it is evaluated in the constraints of every quantity
+  /// constructor and conversion.
+  [[nodiscard]] constexpr bool is_dimensionless() const noexcept {
+    const rational* x = exponents.data();
+    for (std::size_t i = 0; i < base_dimension_count; ++i)
+      if (x[i].num != 0 || x[i].den != 1) return false;
+    return true;
+  }
   /// Number of base dimensions with a non-zero exponent.
   [[nodiscard]] constexpr std::size_t base_count() const noexcept {
     std::size_t c = 0;
@@ -56,7 +64,16 @@ struct dimension {
     return c;
   }
 
-  friend constexpr bool operator==(const dimension&, const dimension&) noexcept = default;
+  /// Written out, not defaulted: the defaulted form goes through `std::array`'s `==` and
+  /// `std::equal`, slower to evaluate as a constant, and every `requires(D1 != D2)` of the
+  /// quantity operators and every `units::` constant's table check is one.
+  friend constexpr bool operator==(const dimension& a, const dimension& b) noexcept {
+    const rational* x = a.exponents.data();
+    const rational* y = b.exponents.data();
+    for (std::size_t i = 0; i < base_dimension_count; ++i)
+      if (x[i].num != y[i].num || x[i].den != y[i].den) return false;
+    return true;
+  }
 
   friend constexpr dimension operator*(const dimension& a, const dimension& b) {
     const auto& x = a.exponents;

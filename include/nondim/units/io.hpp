@@ -2,7 +2,7 @@
 /// \file io.hpp
 /// \brief Stream output of quantities: the SI value and its coherent SI unit ("1.8e-05 kg·m⁻¹·s⁻¹").
 
-#include <ostream>
+#include <iosfwd>  // the operator is a template: <ostream> is needed only where it is used
 
 #include "../core/format.hpp"
 #include "quantity_type.hpp"

@@ -12,14 +12,18 @@
 namespace nondim {
 
 namespace detail {
-/// The table's unit for `symbol` (prefix rules included), checked to have dimension D.
+/// The table's factor for `symbol` (prefix rules included), checked to have dimension `d`.
 /// A missing symbol or another dimension is a compile error (a throw in constant evaluation).
+consteval double table_factor(std::string_view symbol, const dimension& d) {
+  const symbol_position r = resolve_symbol_position(symbol);
+  if (r.entry == unit_table.size()) throw "nondim: unit symbol missing from the table";
+  if (unit_table[r.entry].dim != d) throw "nondim: unit symbol has another dimension in the table";
+  return resolved_factor(r);
+}
+/// The table's unit for `symbol`, of dimension D.
 template <dimension D>
 consteval unit<D> table_unit(std::string_view symbol) {
-  const auto r = resolve_unit_symbol(symbol);
-  if (!r) throw "nondim: unit symbol missing from the table";
-  if (r->entry->dim != D) throw "nondim: unit symbol has another dimension in the table";
-  return unit<D>{r->factor};
+  return unit<D>{table_factor(symbol, D)};
 }
 }  // namespace detail
 
