@@ -18,10 +18,10 @@
 // every exact null vector gives A v = 0 in exact integers, and int64 and cpp_rational give
 // the same null space.
 #include <benchmark/benchmark.h>
-#include <nondim/analysis/analyze.hpp>
-#include <nondim/analysis/detail/exact.hpp>
-#include <nondim/analysis/null_space.hpp>
-#include <nondim/analysis/problem.hpp>
+#include <nondim/analysis/extraction/analyze.hpp>
+#include <nondim/analysis/extraction/detail/exact.hpp>
+#include <nondim/analysis/extraction/null_space.hpp>
+#include <nondim/analysis/extraction/problem.hpp>
 
 #include <Eigen/LU>
 #include <Eigen/SVD>

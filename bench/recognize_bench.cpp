@@ -1,8 +1,8 @@
 // Cost of recognising groups against the catalog and of the named basis (Google Benchmark).
 // Recognition runs for every group of every analyze(); the named basis once per analysis.
-#include <nondim/analysis/named_basis.hpp>
-#include <nondim/analysis/recognize.hpp>
-#include <nondim/core/dims.hpp>
+#include <nondim/analysis/names/named_basis.hpp>
+#include <nondim/analysis/names/recognize.hpp>
+#include <nondim/solver/core/dims.hpp>
 
 #include <benchmark/benchmark.h>
 

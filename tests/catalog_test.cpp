@@ -1,11 +1,11 @@
-// Tests of nondim/analysis/catalog.hpp and quantity_kind.hpp: every entry of the catalog
+// Tests of nondim/analysis/names/catalog.hpp and quantity_kind.hpp: every entry of the catalog
 // against its definition in ISO 80000-11:2019 or the handbook its `source` names (White,
 // Fluid Mechanics; Incropera et al., Fundamentals of Heat and Mass Transfer; Bird, Stewart &
 // Lightfoot, Transport Phenomena). Definitions below are from memory unless said otherwise.
-#include <nondim/analysis/catalog.hpp>
-#include <nondim/analysis/recognize.hpp>
-#include <nondim/core/dims.hpp>
-#include <nondim/core/format.hpp>
+#include <nondim/analysis/names/catalog.hpp>
+#include <nondim/analysis/names/recognize.hpp>
+#include <nondim/solver/core/dims.hpp>
+#include <nondim/solver/core/format.hpp>
 
 #include <doctest/doctest.h>
 

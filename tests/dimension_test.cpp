@@ -1,7 +1,7 @@
-// Tests of nondim/core/dimension.hpp, dims.hpp and format.hpp.
-#include <nondim/core/dimension.hpp>
-#include <nondim/core/dims.hpp>
-#include <nondim/core/format.hpp>
+// Tests of nondim/solver/core/dimension.hpp, dims.hpp and format.hpp.
+#include <nondim/solver/core/dimension.hpp>
+#include <nondim/solver/core/dims.hpp>
+#include <nondim/solver/core/format.hpp>
 
 #include <doctest/doctest.h>
 

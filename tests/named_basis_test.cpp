@@ -1,10 +1,10 @@
-// Tests of nondim/analysis/named_basis.hpp: the named basis of classic problems of fluid
+// Tests of nondim/analysis/names/named_basis.hpp: the named basis of classic problems of fluid
 // mechanics and heat and mass transfer, checked against the groups the textbooks give, and
 // the basis properties (independent, exact, the same span, the dependent variable in one
 // group only).
 #include <nondim/analysis.hpp>
-#include <nondim/analysis/named_basis.hpp>
-#include <nondim/core/dims.hpp>
+#include <nondim/analysis/names/named_basis.hpp>
+#include <nondim/solver/core/dims.hpp>
 
 #include <doctest/doctest.h>
 

@@ -1,10 +1,10 @@
-// Tests of nondim/analysis/pi_groups.hpp: the classical basis computed at compile time, and
+// Tests of nondim/solver/groups/pi_groups.hpp: the classical basis computed at compile time, and
 // group values computed with nothing but the multiplications.
 //
 // Expected exponents: the textbook groups cited in tests/textbook_problems.hpp, brought to the
 // classical form of DESIGN.md by hand, and re-derived independently with python3-sympy by
 // tests/sympy/classical_basis.py (exact rationals, same rule). Both agree for every problem.
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 
 #include <doctest/doctest.h>

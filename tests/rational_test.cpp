@@ -1,5 +1,5 @@
-// Tests of nondim/core/rational.hpp: exact fractions with checked 64-bit arithmetic.
-#include <nondim/core/rational.hpp>
+// Tests of nondim/solver/core/rational.hpp: exact fractions with checked 64-bit arithmetic.
+#include <nondim/solver/core/rational.hpp>
 
 #include <doctest/doctest.h>
 

@@ -1,7 +1,7 @@
-// Tests of nondim/analysis/recognize.hpp: powers of characteristic numbers, ambiguity, and
+// Tests of nondim/analysis/names/recognize.hpp: powers of characteristic numbers, ambiguity, and
 // the ranking by kind hints and conventional names.
-#include <nondim/analysis/recognize.hpp>
-#include <nondim/core/dims.hpp>
+#include <nondim/analysis/names/recognize.hpp>
+#include <nondim/solver/core/dims.hpp>
 
 #include <doctest/doctest.h>
 

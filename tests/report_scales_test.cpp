@@ -1,4 +1,4 @@
-// Tests of nondim/report/scales.hpp: the reference scale of every variable of an analysis
+// Tests of nondim/analysis/report/scales.hpp: the reference scale of every variable of an analysis
 // in its repeating variables (`nondim groups --scales`). JSON is read back with nlohmann-json.
 #include <nondim/report.hpp>
 

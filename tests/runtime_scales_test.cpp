@@ -1,7 +1,7 @@
-// Tests of nondim/analysis/runtime_scales.hpp: reference scales from named references given
+// Tests of nondim/analysis/extraction/runtime_scales.hpp: reference scales from named references given
 // at run time (values with unit text, as an input file gives them).
-#include <nondim/analysis/compile_time.hpp>
-#include <nondim/analysis/runtime_scales.hpp>
+#include <nondim/solver.hpp>
+#include <nondim/analysis/extraction/runtime_scales.hpp>
 #include <nondim/quantity.hpp>
 
 #include <doctest/doctest.h>

@@ -1,6 +1,6 @@
-// Tests of nondim/analysis/scales.hpp: reference scales for nondimensional solvers, exponents
+// Tests of nondim/solver/groups/scales.hpp: reference scales for nondimensional solvers, exponents
 // fixed at compile time.
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 
 #include <doctest/doctest.h>

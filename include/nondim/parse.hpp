@@ -45,7 +45,7 @@
 /// Errors: `unit_error` (std::invalid_argument) with `column()` (1-based, in code points of
 /// the whole text) and `kind()`; `dimension_error` when a dimension is not the one required.
 
-#include "parse/errors.hpp"
-#include "parse/quantity_text.hpp"
-#include "parse/unit_format.hpp"
-#include "parse/unit_parser.hpp"
+#include "solver/parse/errors.hpp"
+#include "solver/parse/quantity_text.hpp"
+#include "solver/parse/unit_format.hpp"
+#include "solver/parse/unit_parser.hpp"

@@ -6,9 +6,9 @@
 
 #include "analysis.hpp"
 
-#include "report/json.hpp"
-#include "report/latex.hpp"
-#include "report/markdown.hpp"
-#include "report/options.hpp"
-#include "report/scales.hpp"
-#include "report/text.hpp"
+#include "analysis/report/json.hpp"
+#include "analysis/report/latex.hpp"
+#include "analysis/report/markdown.hpp"
+#include "analysis/report/options.hpp"
+#include "analysis/report/scales.hpp"
+#include "analysis/report/text.hpp"

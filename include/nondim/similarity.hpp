@@ -3,9 +3,9 @@
 /// \brief Similarity planning from a prototype to a scale model: `similarity_problem`,
 /// `plan_similarity()`, `similarity_plan`, `to_text(similarity_plan)`.
 
-#include "similarity/error.hpp"
-#include "similarity/from_unit.hpp"
-#include "similarity/plan.hpp"
-#include "similarity/plan_similarity.hpp"
-#include "similarity/problem.hpp"
-#include "similarity/report.hpp"
+#include "analysis/similarity/error.hpp"
+#include "analysis/similarity/from_unit.hpp"
+#include "analysis/similarity/plan.hpp"
+#include "analysis/similarity/plan_similarity.hpp"
+#include "analysis/similarity/problem.hpp"
+#include "analysis/similarity/report.hpp"

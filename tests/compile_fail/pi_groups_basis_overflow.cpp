@@ -3,7 +3,7 @@
 // The compile-time analysis must refuse it, never wrap.
 // expect: nondim: the exact basis of these dimensions does not fit in 64-bit rationals
 // expect: L_<1, 3037000507>, nondim::spelled::M_<1, 3037000537>
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 using namespace nondim;
 #ifdef NONDIM_CONTROL
 inline constexpr dimension x{rational{1, 3037000507}, rational{1, 3}, 0};

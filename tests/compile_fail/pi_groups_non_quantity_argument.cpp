@@ -1,7 +1,7 @@
 // A raw number among the arguments of pi_groups: its dimension is unknown.
 // expect: nondim: pi_groups takes quantities
 // expect: not_a_quantity<3, double>
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

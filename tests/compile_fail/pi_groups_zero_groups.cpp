@@ -3,7 +3,7 @@
 // expect: nondim: these variables form no dimensionless group
 // expect: L<1>, nondim::spelled::M<1>, nondim::spelled::T<-2>
 // expect: L<-3>, nondim::spelled::M<1>
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

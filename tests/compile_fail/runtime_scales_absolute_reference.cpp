@@ -2,7 +2,7 @@
 // as a reference does not compile.
 // expect: nondim: a reference temperature is a difference
 // expect: Theta<1>
-#include <nondim/analysis/runtime_scales.hpp>
+#include <nondim/analysis/extraction/runtime_scales.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

@@ -2,7 +2,7 @@
 // compile time when its type says so (theta = (T - T_ref) / dT needs the reference point).
 // expect: nondim: an absolute temperature \(temperature_point\) was passed where a difference is meant
 // expect: Theta<1>
-#include <nondim/analysis/runtime_scales.hpp>
+#include <nondim/analysis/extraction/runtime_scales.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

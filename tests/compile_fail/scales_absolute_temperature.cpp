@@ -2,7 +2,7 @@
 // the reference point, so nondimensional(T) is refused.
 // expect: nondim: an absolute temperature \(temperature_point\) was passed where a difference is meant
 // expect: Theta<1>
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

@@ -1,7 +1,7 @@
 // An absolute temperature given as a reference scale: a scale is a difference (dT).
 // expect: nondim: a reference temperature for scales\(\) is a difference
 // expect: not_a_quantity<2, nondim::temperature_point<double> ?>
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

@@ -2,7 +2,7 @@
 // and L already given it fixes nothing new. The error names the fourth reference.
 // expect: nondim: the references' dimensions must be independent
 // expect: dependent_reference<4, nondim::spelled::dim<nondim::spelled::L<-1>, nondim::spelled::M<1>, .*T<-1>
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

@@ -2,7 +2,7 @@
 // heat flux per kelvin (a heat-transfer coefficient) needs a temperature reference.
 // expect: nondim: this dimension is outside the span of the references
 // expect: references_lack<nondim::spelled::dim<nondim::spelled::Theta<1> ?> ?>
-#include <nondim/analysis/compile_time.hpp>
+#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

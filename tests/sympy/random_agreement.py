@@ -56,7 +56,7 @@ def main():
     rng = random.Random(args.rng)
     problems = [random_problem(rng) for _ in range(args.count)]
     src = [
-        "#include <nondim/analysis/compile_time.hpp>",
+        "#include <nondim/solver.hpp>",
         "#include <cstdio>",
         "using namespace nondim;",
         "template <class B> void show(const B& b, std::size_t n) {",

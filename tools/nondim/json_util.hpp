@@ -5,8 +5,8 @@
 
 #include <nlohmann/json.hpp>
 
-#include <nondim/core/dimension.hpp>
-#include <nondim/core/format.hpp>
+#include <nondim/solver/core/dimension.hpp>
+#include <nondim/solver/core/format.hpp>
 
 namespace nondim::tool {
 

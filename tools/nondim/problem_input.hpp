@@ -9,7 +9,7 @@
 #include <vector>
 
 #include <nondim/analysis.hpp>
-#include <nondim/report/options.hpp>
+#include <nondim/analysis/report/options.hpp>
 
 #include "problem_file.hpp"
 

@@ -1,8 +1,6 @@
 #pragma once
-/// \file compile_time.hpp
-/// \brief The compile-time part of the analysis, on the standard library alone:
-/// dimensionless groups of a solver's variables (`pi_exponents`, `pi_groups`) and reference
-/// scales for nondimensional solvers (`scales`).
+/// \file analysis/compile_time.hpp
+/// \brief Moved in 0.2: compile-time groups and scales belong to the solver half, on the
+/// standard library alone. Include <nondim/solver.hpp>; this forwarding header goes in 0.3.
 
-#include "pi_groups.hpp"
-#include "scales.hpp"
+#include "../solver.hpp"

@@ -1,0 +1,11 @@
+// nondim: the implementation of the analysis half, compiled once.
+//
+// Include this file from exactly one .cpp file of a program whose every translation unit
+// is compiled with NONDIM_SEPARATE_COMPILATION defined (the CMake target nondim::compiled
+// does both). See <nondim/analysis/config.hpp>.
+
+#if !defined(NONDIM_SEPARATE_COMPILATION)
+#error "nondim: <nondim/implementation.ipp> is the compiled-once implementation; define NONDIM_SEPARATE_COMPILATION for every translation unit, or use the headers alone without including this file"
+#endif
+
+#include "nondim.hpp"
