@@ -8,6 +8,7 @@
 #include <nondim/similarity.hpp>
 
 #include <doctest/doctest.h>
+#include <Eigen/Dense>  // the reference solution of one check is computed independently here
 
 #include <cmath>
 #include <cstdint>

@@ -22,6 +22,5 @@
 #include "analysis/extraction/text.hpp"
 #include "analysis/names/catalog.hpp"
 #include "analysis/names/named_basis.hpp"
-#include "analysis/names/naming.hpp"
 #include "analysis/names/quantity_kind.hpp"
 #include "analysis/names/recognize.hpp"

@@ -9,3 +9,11 @@
 #endif
 
 #include "nondim.hpp"
+
+#include "analysis/extraction/analyze.ipp"
+#include "analysis/extraction/explain.ipp"
+#include "analysis/extraction/null_space.ipp"
+#include "analysis/extraction/runtime_scales.ipp"
+#include "analysis/extraction/svd_check.ipp"
+#include "analysis/names/named_basis.ipp"
+#include "analysis/similarity/plan_similarity.ipp"

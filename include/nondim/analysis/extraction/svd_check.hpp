@@ -1,7 +1,8 @@
 #pragma once
 /// \file svd_check.hpp
 /// \brief A floating-point cross-check of the exact analysis: Eigen's SVD of the dimension
-/// matrix in double. Only here does the analysis layer use Eigen.
+/// matrix in double. Only its definition (svd_check.ipp)
+/// uses Eigen.
 
 #include <algorithm>
 #include <cmath>
@@ -10,8 +11,7 @@
 #include <limits>
 #include <vector>
 
-#include <Eigen/SVD>
-
+#include "../config.hpp"
 #include "matrix.hpp"
 #include "pi_group.hpp"
 
@@ -31,24 +31,6 @@ struct svd_check {
   friend bool operator==(const svd_check&, const svd_check&) = default;
 };
 
-namespace detail {
-
-/// Singular values of `m`, descending. Matrices of up to `small_columns` columns (every
-/// problem a person writes) live on the stack: no allocation, the same Jacobi rotations.
-template <class Matrix>
-void singular_values_into(const Matrix& m, std::vector<double>& out) {
-  constexpr Eigen::Index small_columns = 32;
-  const auto take = [&out](const auto& s) { out.assign(s.data(), s.data() + s.size()); };
-  if (m.cols() <= small_columns) {
-    using small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, base_dimension_count, small_columns>;
-    take(Eigen::JacobiSVD<small>(small(m)).singularValues());
-  } else {
-    take(Eigen::JacobiSVD<Eigen::MatrixXd>(Eigen::MatrixXd(m)).singularValues());
-  }
-}
-
-}  // namespace detail
-
 /// \brief The SVD cross-check of `groups` (exponent vectors over the columns of `a`),
 /// whose exact rank is `exact_rank`.
 ///
@@ -57,42 +39,11 @@ void singular_values_into(const Matrix& m, std::vector<double>& out) {
 /// one Eigen's rank-revealing decompositions document). Residual of a group v: the
 /// Euclidean norm of A·v divided by that of v, computed in double; exact groups give 0 up
 /// to the rounding of non-dyadic fractional exponents.
-inline svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_group>& groups,
-                                std::size_t exact_rank) {
-  constexpr std::size_t rows = base_dimension_count;
-  const std::size_t cols = a.cols();
-  // column-major with a fixed count of rows: the residual loops below have a constant trip count
-  Eigen::Matrix<double, rows, Eigen::Dynamic> m(static_cast<Eigen::Index>(rows), static_cast<Eigen::Index>(cols));
-  for (std::size_t j = 0; j < cols; ++j)
-    for (std::size_t i = 0; i < rows; ++i) m.data()[j * rows + i] = a(i, j).to_double();
-
-  svd_check out;
-  if (cols > 0) {
-    detail::singular_values_into(m, out.singular_values);
-    const double largest = out.singular_values.empty() ? 0.0 : out.singular_values.front();
-    out.tolerance = static_cast<double>(std::max(rows, cols)) * std::numeric_limits<double>::epsilon() * largest;
-    for (const double v : out.singular_values)
-      if (v > out.tolerance) ++out.rank;
-  }
-  out.agrees = out.rank == exact_rank;
-
-  // |A v| / |v| per group: over the non-zero exponents only (a group in the classical form
-  // has rank + 1 of them), a fixed-size column update each, without temporaries
-  for (const auto& g : groups) {
-    if (g.exponents.size() != cols) continue;
-    double vv = 0.0;
-    Eigen::Matrix<double, rows, 1> av = Eigen::Matrix<double, rows, 1>::Zero();
-    for (std::size_t j = 0; j < cols; ++j) {
-      const std::int64_t e = g.exponents[j];
-      if (e == 0) continue;
-      const double x = static_cast<double>(e);
-      vv += x * x;
-      av += m.col(static_cast<Eigen::Index>(j)) * x;
-    }
-    if (vv == 0.0) continue;
-    out.max_residual = std::max(out.max_residual, std::sqrt(av.squaredNorm()) / std::sqrt(vv));
-  }
-  return out;
-}
+[[nodiscard]] svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_group>& groups,
+                                std::size_t exact_rank);
 
 }  // namespace nondim
+
+#if !defined(NONDIM_SEPARATE_COMPILATION)
+#include "svd_check.ipp"
+#endif

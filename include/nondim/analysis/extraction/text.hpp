@@ -10,6 +10,7 @@
 #include <string>
 #include <vector>
 
+#include "explain.hpp"
 #include "../../solver/core/format.hpp"
 #include "analyze.hpp"
 #include "../../solver/core/detail/cat.hpp"

@@ -8,6 +8,7 @@
 #include <string_view>
 #include <vector>
 
+#include "../extraction/explain.hpp"
 #include "../../analysis.hpp"
 #include "../../solver/core/detail/cat.hpp"
 #include "detail/names.hpp"

@@ -9,6 +9,7 @@
 #include <string>
 #include <vector>
 
+#include "../extraction/explain.hpp"
 #include "../../analysis.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"

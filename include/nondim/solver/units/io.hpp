@@ -2,7 +2,9 @@
 /// \file io.hpp
 /// \brief Stream output of quantities: the SI value and its coherent SI unit ("1.8e-05 kg·m⁻¹·s⁻¹").
 
-#include <iosfwd>  // the operator is a template: <ostream> is needed only where it is used
+// <ostream>, not <iosfwd>: without the standard inserters declared, `os << q.si()` would
+// pick another overload through a conversion instead of printing the double.
+#include <ostream>
 
 #include "../core/format.hpp"
 #include "quantity_type.hpp"

@@ -17,6 +17,7 @@
 
 #include "../../../solver/core/format.hpp"
 #include "../../../solver/core/rational.hpp"
+#include "too_large.hpp"
 
 namespace nondim::detail {
 
@@ -24,11 +25,6 @@ namespace nondim::detail {
 using big_rational = boost::multiprecision::cpp_rational;
 using big_integer = boost::multiprecision::cpp_int;
 
-/// Internal: a primitive integer vector that does not fit in int64 (only the
-/// multiprecision path can produce one; the caller turns it into an `analysis_error`).
-struct integers_too_large {
-  std::string example;  ///< one of the entries that does not fit, in decimal
-};
 
 // ---- the field operations the elimination needs, for both fields -----------------------
 

@@ -92,4 +92,13 @@ inline std::string rule_text(const std::vector<std::string>& names, std::size_t 
   return s;
 }
 
+inline std::string join(const std::vector<std::string>& items) {
+  std::string s;
+  for (std::size_t i = 0; i < items.size(); ++i) {
+    if (i > 0) s += i + 1 == items.size() ? " and " : ", ";
+    s += items[i];
+  }
+  return s;
+}
+
 }  // namespace nondim::detail
