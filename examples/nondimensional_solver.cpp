@@ -9,7 +9,8 @@
 // with x* = x/L, t* = t U/L and Pe = U L / alpha. The solver sees numbers only; the scales
 // turn the dimensional inputs into them and the results back, once at compile time
 // (`scales`) and once from input text (`runtime_scales`), and both agree.
-#include <nondim/nondim.hpp>
+#include <nondim/analysis.hpp>  // runtime_scales (compiled once: link nondim::compiled)
+#include <nondim/solver.hpp>    // scales: standard library only, cheap in every solver file
 
 #include <cstddef>
 #include <iostream>

@@ -7,8 +7,7 @@
 // a kinematic one is meant, or adding a length to a time, does not compile. Re and Pr come
 // from `pi_groups`: the exponents are worked out by the compiler from the argument types,
 // so the run-time cost is the hand-written products and a wrong exponent cannot happen.
-#include <nondim/solver/groups/pi_groups.hpp>
-#include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>  // quantities and pi_groups: standard library only
 
 #include <cmath>
 #include <iostream>

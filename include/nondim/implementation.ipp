@@ -5,7 +5,8 @@
 // does both). See <nondim/analysis/config.hpp>.
 
 #if !defined(NONDIM_SEPARATE_COMPILATION)
-#error "nondim: <nondim/implementation.ipp> is the compiled-once implementation; define NONDIM_SEPARATE_COMPILATION for every translation unit, or use the headers alone without including this file"
+#error \
+    "nondim: <nondim/implementation.ipp> is the compiled-once implementation; define NONDIM_SEPARATE_COMPILATION for every translation unit, or use the headers alone without including this file"
 #endif
 
 #include "nondim.hpp"
@@ -15,5 +16,12 @@
 #include "analysis/extraction/null_space.ipp"
 #include "analysis/extraction/runtime_scales.ipp"
 #include "analysis/extraction/svd_check.ipp"
+#include "analysis/extraction/text.ipp"
 #include "analysis/names/named_basis.ipp"
+#include "analysis/report/json.ipp"
+#include "analysis/report/latex.ipp"
+#include "analysis/report/markdown.ipp"
+#include "analysis/report/scales.ipp"
+#include "analysis/report/text.ipp"
 #include "analysis/similarity/plan_similarity.ipp"
+#include "analysis/similarity/report.ipp"

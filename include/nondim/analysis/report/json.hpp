@@ -13,86 +13,20 @@
 #include <vector>
 
 #include "../../analysis.hpp"
+#include "../config.hpp"
 #include "detail/json.hpp"
 #include "latex.hpp"
 
 namespace nondim {
 
-namespace detail {
-
-inline json_value json_exponent(const rational& r) {
-  if (r.is_integer()) return json_value(r.num);
-  return json_value(to_string(r));
-}
-
-/// {"L": 1, "T": -2}: keys are the ASCII base-dimension symbols (L M T I Theta N J).
-inline json_value json_dimension(const dimension& d) {
-  json_members m;
-  for (std::size_t i = 0; i < base_dimension_count; ++i)
-    if (!d[i].is_zero()) m.emplace_back(std::string(dimension_symbol(i, text_form::ascii)), json_exponent(d[i]));
-  return m;
-}
-
-inline json_value json_group(const pi_group& g) {
-  json_members exponents;
-  // the non-repeating variable first, then the problem's order: as the text form reads
-  const auto put = [&](std::size_t i) {
-    if (i < g.exponents.size() && i < g.variables().size() && g.exponents[i] != 0)
-      exponents.emplace_back(g.variables()[i], json_value(g.exponents[i]));
-  };
-  put(g.non_repeating);
-  for (std::size_t i = 0; i < g.exponents.size(); ++i)
-    if (i != g.non_repeating) put(i);
-  json_elements matches;
-  for (const auto& m : g.matches)
-    matches.emplace_back(json_members{
-        {"name", std::string(m.name)}, {"symbol", std::string(m.symbol)}, {"power", json_exponent(m.power)}});
-  return json_members{{"exponents", std::move(exponents)},
-                      {"text", g.text(text_form::ascii)},
-                      {"latex", latex(g)},
-                      {"matches", std::move(matches)}};
-}
-
-}  // namespace detail
-
-namespace detail {
-
-/// The members of the `json_report` object, in order.
-inline json_members json_report_members(const analysis& a) {
-  json_elements variables;
-  for (const auto& v : a.variables)
-    variables.emplace_back(json_members{{"name", v.name}, {"unit", v.unit}, {"dimension", json_dimension(v.dim)}});
-  json_elements repeating;
-  for (const auto& r : a.repeating) repeating.emplace_back(r);
-  json_elements groups;
-  for (const auto& g : a.groups) groups.push_back(json_group(g));
-  json_elements singular;
-  for (const double v : a.svd.singular_values) singular.emplace_back(v);
-  return json_members{{"variables", std::move(variables)},
-                      {"rank", a.rank},
-                      {"repeating", std::move(repeating)},
-                      {"groups", std::move(groups)},
-                      {"svd_check", json_members{{"rank", a.svd.rank},
-                                                 {"agrees", a.svd.agrees},
-                                                 {"singular_values", std::move(singular)},
-                                                 {"max_residual", a.svd.max_residual}}}};
-}
-
-inline std::string json_text(const json_value& root) {
-  std::string out;
-  write_json_pretty(out, root, 0, 0);
-  out.push_back('\n');
-  return out;
-}
-
-}  // namespace detail
-
 /// \brief The analysis as one JSON object:
 /// `{"variables": [{"name", "unit", "dimension"}], "rank", "repeating", "groups": [{"exponents",
 /// "text", "latex", "matches": [{"name", "symbol", "power"}]}], "svd_check": {"rank", "agrees",
 /// "singular_values", "max_residual"}}`, indented, ending in a newline.
-inline std::string json_report(const analysis& a) {
-  return detail::json_text(detail::json_report_members(a));
-}
+[[nodiscard]] std::string json_report(const analysis& a);
 
 }  // namespace nondim
+
+#if !defined(NONDIM_SEPARATE_COMPILATION)
+#include "json.ipp"
+#endif

@@ -8,9 +8,10 @@
 #include <string_view>
 #include <vector>
 
-#include "../extraction/explain.hpp"
 #include "../../analysis.hpp"
 #include "../../solver/core/detail/cat.hpp"
+#include "../config.hpp"
+#include "../extraction/explain.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"
 #include "options.hpp"
@@ -18,92 +19,11 @@
 
 namespace nondim {
 
-namespace detail {
-
-/// Text in a Markdown table cell: the characters that would start emphasis, code, links or
-/// end the cell are escaped; control characters become spaces.
-inline std::string markdown_escape(std::string_view s) {
-  std::string out;
-  for (const char c : s) {
-    if (static_cast<unsigned char>(c) < 0x20U) {
-      out.push_back(' ');
-      continue;
-    }
-    if (c == '\\' || c == '*' || c == '_' || c == '|' || c == '`' || c == '<' || c == '>' || c == '[' || c == ']' ||
-        c == '#')
-      out.push_back('\\');
-    out.push_back(c);
-  }
-  return out;
-}
-
-inline std::string markdown_row(const std::vector<std::string>& cells) {
-  std::string s = "|";
-  for (const auto& c : cells) s += " " + c + " |";
-  return s + "\n";
-}
-
-}  // namespace detail
-
 /// \brief The analysis as GitHub-flavoured Markdown (Unicode symbols: ρ, U⁻², Π1).
-inline std::string markdown_report(const analysis& a, const report_options& o = {}) {
-  constexpr text_form form = text_form::unicode;
-  std::string s;
-  if (!o.title.empty()) s += "## " + detail::markdown_escape(o.title) + "\n\n";
-
-  const std::vector<std::size_t> bases = a.matrix.present_rows();
-  bool any_note = false;
-  for (const auto& n : o.notes) any_note = any_note || !n.empty();
-  std::vector<std::string> head{"variable", "unit"};
-  std::vector<std::string> rule{":--", ":--"};
-  for (std::size_t i : bases) {
-    head.emplace_back(dimension_symbol(i, form));
-    rule.emplace_back("--:");
-  }
-  if (any_note) {
-    head.emplace_back("note");
-    rule.emplace_back(":--");
-  }
-  s += detail::markdown_row(head) + detail::markdown_row(rule);
-  for (std::size_t j = 0; j < a.variables.size(); ++j) {
-    std::vector<std::string> r{detail::markdown_escape(display_name(a.variables[j].name, form)),
-                               detail::markdown_escape(a.variables[j].unit)};
-    for (std::size_t i : bases) r.push_back(to_string(a.matrix(i, j)));
-    if (any_note) r.push_back(j < o.notes.size() ? detail::markdown_escape(o.notes[j]) : "");
-    s += detail::markdown_row(r);
-  }
-  s += "\n";
-  s += "**Rank** " + std::to_string(a.rank) + " · **dependent** " +
-       detail::markdown_escape(display_name(a.dependent, form)) + " · **repeating** " +
-       detail::markdown_escape(detail::comma_list(a.repeating, form)) +
-       (a.repeating_given ? " (given)" : " (chosen automatically)") + "\n\n";
-  if (a.deficiency.deficient)
-    s += detail::markdown_escape(detail::explain_deficiency(a.rank, a.deficiency, form)) + "\n\n";
-
-  s += detail::markdown_row({"group", "expression", "recognised as"}) + detail::markdown_row({":--", ":--", ":--"});
-  for (std::size_t k = 0; k < a.groups.size(); ++k) {
-    std::string names;
-    for (const auto& m : a.groups[k].matches)
-      names +=
-          detail::cat(names.empty() ? "" : "; ", m.symbol, detail::exponent_suffix(m.power, form), " (", m.name, ")");
-    s += detail::markdown_row({"\u03a0" + std::to_string(k + 1), detail::markdown_escape(a.groups[k].text(form)),
-                               names.empty() ? "–" : detail::markdown_escape(names)});
-  }
-  s += "\n";
-
-  if (a.isolated.empty()) {
-    s += "**Excluded:** none.\n\n";
-  } else {
-    s += "**Excluded** (in no group):\n\n";
-    for (std::size_t k = 0; k < a.isolated.size(); ++k)
-      s += "- " + detail::markdown_escape(display_name(a.isolated[k], form)) + ": " +
-           detail::markdown_escape(k < a.isolated_reasons.size() ? a.isolated_reasons[k] : std::string{}) + "\n";
-    s += "\n";
-  }
-  s += detail::markdown_escape(detail::svd_line(a.svd)) + "\n";
-  for (const auto& note : a.notes)
-    if (note != a.deficiency.explanation) s += "\n> **Note:** " + detail::markdown_escape(note) + "\n";
-  return s;
-}
+[[nodiscard]] std::string markdown_report(const analysis& a, const report_options& o = {});
 
 }  // namespace nondim
+
+#if !defined(NONDIM_SEPARATE_COMPILATION)
+#include "markdown.ipp"
+#endif

@@ -1,0 +1,136 @@
+#pragma once
+// Definitions of text.hpp: compiled once under NONDIM_SEPARATE_COMPILATION
+// (<nondim/implementation.ipp>), inline otherwise.
+
+#include <algorithm>
+#include <cstddef>
+#include <cstdio>
+#include <ostream>
+#include <string>
+#include <vector>
+#include "../../solver/core/detail/cat.hpp"
+#include "../../solver/core/format.hpp"
+#include "analyze.hpp"
+#include "explain.hpp"
+#include "result.hpp"
+#include "symbols.hpp"
+#include "text.hpp"
+
+namespace nondim {
+
+namespace detail {
+
+inline std::string pad_left(const std::string& s, std::size_t width) {
+  const std::size_t w = display_width(s);
+  return w >= width ? s : std::string(width - w, ' ').append(s);
+}
+
+inline std::string short_double(double v) {
+  char buf[32];
+  std::snprintf(buf, sizeof buf, "%.6g", v);
+  return buf;
+}
+
+/// " = Re⁻¹ (Reynolds number)" for the best match; other entries of the same form follow
+/// as "; same form: C_L (lift coefficient)", not chained with "=": Nu and Bi share a form
+/// but are not equal.
+inline std::string names_suffix(const pi_group& g, text_form form) {
+  std::string s;
+  for (std::size_t k = 0; k < g.matches.size(); ++k) {
+    const auto& m = g.matches[k];
+    s.append(k == 0   ? " = "
+             : k == 1 ? "; same form: "
+                      : ", ")
+        .append(m.symbol)
+        .append(exponent_suffix(m.power, form))
+        .append(" (")
+        .append(m.name)
+        .append(")");
+  }
+  return s;
+}
+
+/// "SVD check: rank 3, agrees with the exact rank; singular values 3.74, 2.8, 0.369 (2 more
+/// below the tolerance 1.7e-15); max residual 0". Values below the tolerance are rounding
+/// noise and are only counted.
+inline std::string svd_line(const svd_check& c) {
+  std::string s = "SVD check: rank " + std::to_string(c.rank) + (c.agrees ? ", agrees" : ", DISAGREES") +
+                  " with the exact rank; singular values";
+  std::size_t shown = 0;
+  std::size_t below = 0;
+  for (const double v : c.singular_values) {
+    if (v > c.tolerance) {
+      s += (shown++ ? ", " : " ") + short_double(v);
+    } else {
+      ++below;
+    }
+  }
+  if (shown == 0) s += " none above the tolerance";
+  if (below != 0) s += " (" + std::to_string(below) + " more below the tolerance " + short_double(c.tolerance) + ")";
+  return s + "; max residual " + short_double(c.max_residual);
+}
+
+}  // namespace detail
+
+NONDIM_ANALYSIS_INLINE std::string to_string(const analysis& a, text_form form) {
+  const bool uni = form == text_form::unicode;
+  std::string s = "dimension matrix\n";
+  const std::size_t n = a.variables.size();
+  std::vector<std::string> head(n);
+  std::vector<std::vector<std::string>> cells(n);
+  std::vector<std::size_t> width(n, 0);
+  const std::vector<std::size_t> rows = a.matrix.present_rows();
+  for (std::size_t j = 0; j < n; ++j) {
+    head[j] = display_name(a.variables[j].name, form);
+    width[j] = detail::display_width(head[j]);
+    for (std::size_t i : rows) {
+      cells[j].push_back(to_string(a.matrix(i, j)));
+      width[j] = std::max(width[j], detail::display_width(cells[j].back()));
+    }
+  }
+  std::size_t label = 1;
+  for (std::size_t i : rows) label = std::max(label, detail::display_width(dimension_symbol(i, form)));
+  using detail::cat;
+  s.append(label + 2, ' ');
+  for (std::size_t j = 0; j < n; ++j) s.append("  ").append(detail::pad_left(head[j], width[j]));
+  s.push_back('\n');
+  for (std::size_t r = 0; r < rows.size(); ++r) {
+    s.append("  ").append(detail::pad_left(std::string(dimension_symbol(rows[r], form)), label));
+    for (std::size_t j = 0; j < n; ++j) s.append("  ").append(detail::pad_left(cells[j][r], width[j]));
+    s.push_back('\n');
+  }
+  if (rows.empty()) s.append("  (every variable is dimensionless)\n");
+
+  s.append(cat("rank ", std::to_string(a.rank), "\n"));
+  if (a.deficiency.deficient) s.append(cat("  ", detail::explain_deficiency(a.rank, a.deficiency, form), "\n"));
+  s.append(cat("dependent ", display_name(a.dependent, form), "\n"));
+  s.append("repeating ");
+  for (std::size_t k = 0; k < a.repeating.size(); ++k)
+    s.append(k ? ", " : "").append(display_name(a.repeating[k], form));
+  if (a.repeating.empty()) s.append("none");
+  s.append(a.repeating_given ? " (given)\n" : " (chosen automatically)\n");
+
+  s.append(cat("groups (", std::to_string(a.groups.size()), ")\n"));
+  for (std::size_t k = 0; k < a.groups.size(); ++k)
+    s.append(cat("  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form),
+                 detail::names_suffix(a.groups[k], form), "\n"));
+
+  if (a.isolated.empty()) {
+    s.append("isolated: none\n");
+  } else {
+    s.append("isolated\n");
+    for (std::size_t k = 0; k < a.isolated.size(); ++k) {
+      const auto j = a.index_of(a.isolated[k]);
+      const std::string reason =
+          j ? detail::isolation_reason(a.variables, *j, a.isolated[k] == a.dependent, form) : a.isolated_reasons[k];
+      s.append(cat("  ", display_name(a.isolated[k], form), ": ", reason, "\n"));
+    }
+  }
+
+  s.append(detail::svd_line(a.svd)).push_back('\n');
+  for (const auto& note : a.notes)
+    if (note != a.deficiency.explanation) s.append(cat("note: ", note, "\n"));
+  return s;
+}
+
+}  // namespace nondim

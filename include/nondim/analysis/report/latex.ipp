@@ -1,0 +1,139 @@
+#pragma once
+// Definitions of latex.hpp: compiled once under NONDIM_SEPARATE_COMPILATION
+// (<nondim/implementation.ipp>), inline otherwise.
+
+#include <array>
+#include <cstddef>
+#include <cstdint>
+#include <string>
+#include <string_view>
+#include "../../analysis.hpp"
+#include "detail/names.hpp"
+#include "latex.hpp"
+#include "options.hpp"
+
+namespace nondim {
+
+namespace detail {
+
+/// Greek spellings whose LaTeX macro is the spelling itself (lower case and the upper-case
+/// letters that differ from Latin ones); `eps` is the usual short form of \varepsilon.
+inline constexpr std::array<std::string_view, 34> latex_greek{
+    "alpha", "beta",  "gamma",  "delta", "epsilon", "zeta",  "eta",     "theta", "iota", "kappa", "lambda", "mu",
+    "nu",    "xi",    "pi",     "rho",   "sigma",   "tau",   "upsilon", "phi",   "chi",  "psi",   "omega",  "Gamma",
+    "Delta", "Theta", "Lambda", "Xi",    "Pi",      "Sigma", "Upsilon", "Phi",   "Psi",  "Omega"};
+
+/// Text set upright in math mode, with the characters LaTeX treats specially escaped.
+inline std::string latex_upright(std::string_view s) {
+  std::string out;
+  for (const char c : s) {
+    switch (c) {
+      case '#':
+      case '$':
+      case '%':
+      case '&':
+      case '_':
+      case '{':
+      case '}':
+        out.push_back('\\');
+        out.push_back(c);
+        break;
+      case '\\':
+        out += "\\backslash{}";
+        break;
+      case '~':
+        out += "\\sim{}";
+        break;
+      case '^':
+        out += "\\wedge{}";
+        break;
+      default:
+        out.push_back(c);
+    }
+  }
+  return out;
+}
+
+/// One piece of a name: a Greek spelling becomes its macro, one character stays italic,
+/// a longer word is set upright.
+inline std::string latex_word(std::string_view w) {
+  if (w == "eps") return "\\varepsilon";
+  for (const auto g : latex_greek)
+    if (w == g) return "\\" + std::string(g);
+  if (w.size() == 1 && ((w[0] >= 'a' && w[0] <= 'z') || (w[0] >= 'A' && w[0] <= 'Z'))) return std::string(w);
+  if (w.find_first_not_of("0123456789") == std::string_view::npos && !w.empty()) return std::string(w);
+  return "\\mathrm{" + latex_upright(w) + "}";
+}
+
+/// `x^{e}` for the exponent e (none when e == 1); `{x}` braces keep `\rho_{w}^{2}` legal.
+inline std::string latex_power(const std::string& base, const rational& e) {
+  if (e == rational{1}) return base;
+  const bool subscripted = base.find('_') != std::string::npos;
+  return (subscripted ? "{" + base + "}" : base) + "^{" + to_string(e) + "}";
+}
+
+/// A catalog symbol in LaTeX math: `Re` -> `\mathrm{Re}`, `C_D` -> `C_{\mathrm{D}}`
+/// (descriptive subscripts upright, ISO 80000-2), `eps/D` -> `\varepsilon/D`.
+inline std::string latex_symbol(std::string_view symbol) {
+  if (const auto slash = symbol.find('/'); slash != std::string_view::npos)
+    return latex_symbol(symbol.substr(0, slash)) + "/" + latex_symbol(symbol.substr(slash + 1));
+  const auto underscore = symbol.find('_');
+  const std::string_view head = symbol.substr(0, underscore);
+  std::string s = head == "eps" || head.size() == 1 ? latex_word(head) : "\\mathrm{" + latex_upright(head) + "}";
+  if (underscore != std::string_view::npos) s += "_{\\mathrm{" + latex_upright(symbol.substr(underscore + 1)) + "}}";
+  return s;
+}
+
+}  // namespace detail
+
+NONDIM_ANALYSIS_INLINE std::string latex_name(std::string_view name) {
+  const auto parts = detail::split_name(name);
+  std::string s = detail::latex_word(parts.head);
+  if (!parts.subscript.empty()) s += "_{" + detail::latex_word(parts.subscript) + "}";
+  return s;
+}
+
+NONDIM_ANALYSIS_INLINE std::string latex(const pi_group& g) {
+  std::string num;
+  std::string den;
+  const auto put = [&](std::size_t i) {
+    const std::int64_t e = g.exponents[i];
+    if (e == 0) return;
+    std::string& side = e > 0 ? num : den;
+    if (!side.empty()) side += " ";
+    side += detail::latex_power(latex_name(g.variables()[i]), rational{e > 0 ? e : -e});
+  };
+  if (g.non_repeating < g.exponents.size()) put(g.non_repeating);
+  for (std::size_t i = 0; i < g.exponents.size() && i < g.variables().size(); ++i)
+    if (i != g.non_repeating) put(i);
+  if (den.empty()) return num.empty() ? "1" : num;
+  return "\\frac{" + (num.empty() ? std::string("1") : num) + "}{" + den + "}";
+}
+
+NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_options& o) {
+  std::string s;
+  if (!o.title.empty()) s += "% " + detail::one_line(o.title) + "\n";
+  s += "% dimensionless groups of " + std::to_string(a.variables.size()) + " variables, rank " +
+       std::to_string(a.rank) + "; repeating: " + detail::comma_list(a.repeating) + "\n";
+  for (std::size_t k = 0; k < a.groups.size(); ++k) {
+    s += "\\[ \\Pi_{" + std::to_string(k + 1) + "} = " + latex(a.groups[k]);
+    // Only the best match goes into the equation: two entries that share a form (Nu and
+    // Bi) are not equal to each other, so chaining them would state a falsehood.
+    const auto& names = a.groups[k].matches;
+    if (!names.empty()) s += " = " + detail::latex_power(detail::latex_symbol(names[0].symbol), names[0].power);
+    s += " \\]";
+    if (!names.empty()) {
+      s += "  % " + detail::one_line(names[0].name);
+      for (std::size_t m = 1; m < names.size(); ++m)
+        s += (m == 1 ? "; the same form: " : ", ") + detail::one_line(names[m].name) + " (" +
+             detail::one_line(names[m].symbol) + ")";
+    }
+    s += "\n";
+  }
+  for (std::size_t k = 0; k < a.isolated.size(); ++k)
+    s += "% excluded: " + a.isolated[k] + " (" +
+         detail::one_line(k < a.isolated_reasons.size() ? a.isolated_reasons[k] : "") + ")\n";
+  return s;
+}
+
+}  // namespace nondim

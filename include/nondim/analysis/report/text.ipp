@@ -1,0 +1,70 @@
+#pragma once
+// Definitions of text.hpp: compiled once under NONDIM_SEPARATE_COMPILATION
+// (<nondim/implementation.ipp>), inline otherwise.
+
+#include <cstddef>
+#include <string>
+#include <vector>
+#include "../../analysis.hpp"
+#include "../extraction/explain.hpp"
+#include "detail/names.hpp"
+#include "detail/table.hpp"
+#include "options.hpp"
+#include "text.hpp"
+
+namespace nondim {
+
+NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_options& o, text_form form) {
+  const bool uni = form == text_form::unicode;
+  std::string s;
+  if (!o.title.empty()) s += detail::one_line(o.title) + "\n\n";
+
+  const std::vector<std::size_t> bases = a.matrix.present_rows();
+  bool any_note = false;
+  for (const auto& n : o.notes) any_note = any_note || !n.empty();
+  std::vector<std::vector<std::string>> rows;
+  std::vector<detail::align> how{detail::align::left, detail::align::left};
+  rows.push_back({"variable", "unit"});
+  for (std::size_t i : bases) {
+    rows[0].emplace_back(dimension_symbol(i, form));
+    how.push_back(detail::align::right);
+  }
+  if (any_note) {
+    rows[0].emplace_back("note");
+    how.push_back(detail::align::left);
+  }
+  for (std::size_t j = 0; j < a.variables.size(); ++j) {
+    std::vector<std::string> r{display_name(a.variables[j].name, form), detail::one_line(a.variables[j].unit)};
+    for (std::size_t i : bases) r.push_back(to_string(a.matrix(i, j)));
+    if (any_note) r.push_back(j < o.notes.size() ? detail::one_line(o.notes[j]) : "");
+    rows.push_back(std::move(r));
+  }
+  s += "dimension matrix\n" + detail::aligned_table(rows, how, 2);
+  if (bases.empty()) s += "  (every variable is dimensionless)\n";
+
+  s += "rank " + std::to_string(a.rank) + "\n";
+  if (a.deficiency.deficient) s += "  " + detail::explain_deficiency(a.rank, a.deficiency, form) + "\n";
+  s += "dependent " + display_name(a.dependent, form) + "\n";
+  s += "repeating " + detail::comma_list(a.repeating, form) +
+       (a.repeating_given ? " (given)\n" : " (chosen automatically)\n");
+
+  s += "groups (" + std::to_string(a.groups.size()) + ")\n";
+  for (std::size_t k = 0; k < a.groups.size(); ++k)
+    s += std::string("  ") + (uni ? "\u03a0" : "Pi") + std::to_string(k + 1) + " = " + a.groups[k].text(form) +
+         detail::names_suffix(a.groups[k], form) + "\n";
+
+  if (a.isolated.empty()) {
+    s += "excluded: none\n";
+  } else {
+    s += "excluded (in no group)\n";
+    for (std::size_t k = 0; k < a.isolated.size(); ++k)
+      s += "  " + display_name(a.isolated[k], form) + ": " +
+           (k < a.isolated_reasons.size() ? a.isolated_reasons[k] : std::string{}) + "\n";
+  }
+  s += detail::svd_line(a.svd) + "\n";
+  for (const auto& note : a.notes)
+    if (note != a.deficiency.explanation) s += "note: " + note + "\n";
+  return s;
+}
+
+}  // namespace nondim
