@@ -2,7 +2,8 @@
 /// \file analysis.hpp
 /// \brief The analysis layer: named variables, the exact dimensionless groups, their
 /// evaluation and text forms, the SVD cross-check, reference scales (compile time and run
-/// time, from references read as text), the catalog of characteristic numbers and the named basis. Needs Boost.Multiprecision and Eigen.
+/// time, from references read as text), the catalog of characteristic numbers and the named basis. Needs
+/// Boost.Multiprecision and Eigen.
 
 #include "parse.hpp"
 #include "quantity.hpp"

@@ -8,14 +8,14 @@
 #include <string>
 #include <vector>
 
-#include "analyze.hpp"
+#include "../../solver/core/detail/cat.hpp"
 #include "../../solver/core/dimension.hpp"
 #include "../../solver/core/format.hpp"
-#include "../../solver/core/detail/cat.hpp"
-#include "detail/core.hpp"
-#include "explain.hpp"
-#include "error.hpp"
 #include "../names/naming.hpp"
+#include "analyze.hpp"
+#include "detail/core.hpp"
+#include "error.hpp"
+#include "explain.hpp"
 #include "options.hpp"
 #include "pi_group.hpp"
 #include "problem.hpp"
@@ -50,7 +50,7 @@ inline analysis classical_analysis(const problem& p, const options& o) {
       throw analysis_error(cat("nondim: repeating variable '", r, "' is given twice"), r);
     if (vars[*j].dim.is_dimensionless())
       throw analysis_error(cat("nondim: repeating variable '", r,
-                                "' is dimensionless; it cannot be repeating (it is a group by itself)"),
+                               "' is dimensionless; it cannot be repeating (it is a group by itself)"),
                            r);
     given.push_back(*j);
   }
@@ -101,7 +101,7 @@ inline analysis classical_analysis(const problem& p, const options& o) {
 
   if (a.missing_variable)
     a.notes.push_back(cat("a variable is missing: the dependent variable '", a.dependent,
-                           "' cannot be made dimensionless with the others"));
+                          "' cannot be made dimensionless with the others"));
   if (a.repeating_given && repeating[dependent])
     a.notes.push_back(
         cat("the dependent variable '", a.dependent, "' is repeating, so it may appear in several groups"));
@@ -119,7 +119,7 @@ NONDIM_ANALYSIS_INLINE analysis analyze(const problem& p, const options& o) {
   a.svd = check_with_svd(a.matrix, a.groups, a.rank);
   if (!a.svd.agrees)
     a.notes.push_back(detail::cat("the SVD in double finds rank ", std::to_string(a.svd.rank), ", the exact rank is ",
-                                   std::to_string(a.rank), ": the dimension matrix is numerically ill-conditioned"));
+                                  std::to_string(a.rank), ": the dimension matrix is numerically ill-conditioned"));
   return a;
 }
 

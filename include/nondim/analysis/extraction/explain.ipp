@@ -58,15 +58,15 @@ NONDIM_ANALYSIS_INLINE std::string isolation_reason(const std::vector<variable>&
   std::string why;
   if (!alone.empty())
     why = cat(alone.size() == 1 ? "its base dimension " : "its base dimensions ", spoken_list(alone),
-               alone.size() == 1 ? " appears" : " appear", " in no other variable");
+              alone.size() == 1 ? " appears" : " appear", " in no other variable");
   else
     why = cat("no product of powers of the other variables has its dimension ", dim);
   if (is_dependent)
     return cat(name, " is the dependent variable, but ", why,
-                ", so no group can contain it: a variable is missing from the problem",
-                alone.empty() ? std::string{} : cat(" (one whose dimension involves ", spoken_list(alone), ")"));
+               ", so no group can contain it: a variable is missing from the problem",
+               alone.empty() ? std::string{} : cat(" (one whose dimension involves ", spoken_list(alone), ")"));
   return cat(why, ", so no group can contain ", name,
-              ": either it does not affect the result (as the mass of a pendulum) or a variable is missing");
+             ": either it does not affect the result (as the mass of a pendulum) or a variable is missing");
 }
 
 /// \brief The sentence that explains a rank below the count of base dimensions present.
@@ -87,12 +87,12 @@ NONDIM_ANALYSIS_INLINE std::string explain_deficiency(std::size_t rank, const ra
   for (std::size_t i = 0; i < base_dimension_count; ++i)
     if (involved[i]) tied.emplace_back(dimension_symbol(i, form));
   std::string s = cat("rank ", std::to_string(rank), " is less than the ", std::to_string(d.present.size()),
-                       " base dimensions that appear (", spoken_list(present), "): ");
+                      " base dimensions that appear (", spoken_list(present), "): ");
   if (d.too_large) return s.append("they appear only in fixed combinations whose exponents exceed 64 bits");
   s.append("every variable's dimension is a product of powers of ").append(spoken_list(spanned));
   if (!combos.empty())
     s.append(cat(", so ", spoken_list(tied), " appear only in the fixed combination", combos.size() == 1 ? " " : "s ",
-                  spoken_list(combos)));
+                 spoken_list(combos)));
   return s;
 }
 

@@ -16,8 +16,7 @@
 
 namespace nondim {
 
-NONDIM_ANALYSIS_INLINE null_space_basis exact_null_space(const dimension_matrix& a,
-                                         exact_arithmetic arithmetic) {
+NONDIM_ANALYSIS_INLINE null_space_basis exact_null_space(const dimension_matrix& a, exact_arithmetic arithmetic) {
   return detail::run_exact(arithmetic, [&]<class F>() {
     const std::size_t n = a.cols();
     std::vector<std::size_t> order(n);
@@ -37,7 +36,7 @@ NONDIM_ANALYSIS_INLINE null_space_basis exact_null_space(const dimension_matrix&
         out.vectors.push_back(detail::echelon_null_vector(e, c, std::span<const std::size_t>(order), n));
       } catch (const detail::integers_too_large& x) {
         throw analysis_error(detail::cat("nondim: the null vector of column ", std::to_string(c + 1),
-                                          " needs an exponent beyond 64 bits (", x.example, ")"));
+                                         " needs an exponent beyond 64 bits (", x.example, ")"));
       }
     }
     return out;

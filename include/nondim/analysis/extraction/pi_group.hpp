@@ -13,11 +13,11 @@
 #include <utility>
 #include <vector>
 
+#include "../../solver/core/detail/cat.hpp"
 #include "../../solver/core/format.hpp"
 #include "../../solver/core/rational.hpp"
-#include "../../solver/core/detail/cat.hpp"
-#include "error.hpp"
 #include "../names/recognize.hpp"
+#include "error.hpp"
 #include "symbols.hpp"
 
 namespace nondim {
@@ -105,7 +105,7 @@ struct pi_group {
   [[nodiscard]] double value(std::span<const double> si_values) const {
     if (si_values.size() != exponents.size())
       throw analysis_error(detail::cat("nondim: ", std::to_string(si_values.size()), " values given for a group of ",
-                                        std::to_string(exponents.size()), " variables"));
+                                       std::to_string(exponents.size()), " variables"));
     double r = 1.0;
     for (std::size_t i = 0; i < exponents.size(); ++i)
       if (exponents[i] != 0) r = detail::apply_factor(r, si_values[i], exponents[i]);
@@ -151,12 +151,12 @@ struct pi_group {
   void evaluate(std::span<const std::span<const double>> columns, std::span<double> out) const {
     if (columns.size() != exponents.size())
       throw analysis_error(detail::cat("nondim: ", std::to_string(columns.size()), " columns given for a group of ",
-                                        std::to_string(exponents.size()), " variables"));
+                                       std::to_string(exponents.size()), " variables"));
     for (std::size_t i = 0; i < exponents.size(); ++i)
       if (exponents[i] != 0 && columns[i].size() != out.size())
         throw analysis_error(
-            detail::cat("nondim: the column of variable '", variables()[i], "' has ",
-                         std::to_string(columns[i].size()), " cells, the output ", std::to_string(out.size())),
+            detail::cat("nondim: the column of variable '", variables()[i], "' has ", std::to_string(columns[i].size()),
+                        " cells, the output ", std::to_string(out.size())),
             variables()[i]);
     for (std::size_t c = 0; c < out.size(); ++c) {
       double r = 1.0;
@@ -197,12 +197,12 @@ struct pi_group {
                                                         : nullptr;
       if (what != nullptr)
         throw analysis_error(detail::cat("nondim: the value of '", variables()[i], "'", where, what, " (group ",
-                                          text(text_form::ascii), ")"),
+                                         text(text_form::ascii), ")"),
                              variables()[i]);
     }
     if (!std::isfinite(r))
       throw analysis_error(detail::cat("nondim: the value of the group ", text(text_form::ascii), where,
-                                        " overflows a double (", std::to_string(r), ")"));
+                                       " overflows a double (", std::to_string(r), ")"));
   }
 };
 

@@ -10,11 +10,11 @@
 #include <utility>
 #include <vector>
 
+#include "../../solver/core/detail/cat.hpp"
 #include "../../solver/core/dimension.hpp"
 #include "../../solver/core/format.hpp"
 #include "../../solver/parse/errors.hpp"
 #include "../../solver/parse/unit_parser.hpp"
-#include "../../solver/core/detail/cat.hpp"
 #include "error.hpp"
 #include "matrix.hpp"
 
@@ -72,8 +72,8 @@ class problem {
       std::string why = e.what();
       if (why.rfind("nondim: ", 0) == 0) why.erase(0, 8);
       std::throw_with_nested(analysis_error(
-          detail::cat("nondim: variable '", name, "' has a unit that cannot be read ('", unit_text, "'): ", why),
-          name, e.column()));
+          detail::cat("nondim: variable '", name, "' has a unit that cannot be read ('", unit_text, "'): ", why), name,
+          e.column()));
     }
     variables_.push_back(variable{std::move(name), u.dim, std::string(unit_text), u.factor, u.offset});
     return *this;
@@ -111,13 +111,14 @@ class problem {
  private:
   void check_name(const std::string& name) const {
     if (name.find_first_not_of(" \t\r\n") == std::string::npos)
-      throw analysis_error(detail::cat("nondim: variable ", std::to_string(variables_.size() + 1), " of the problem has an empty name"));
+      throw analysis_error(
+          detail::cat("nondim: variable ", std::to_string(variables_.size() + 1), " of the problem has an empty name"));
     if (index_of(name))
       throw analysis_error(detail::cat("nondim: variable '", name, "' is already in the problem"), name);
     if (variables_.size() == max_problem_variables)
       throw analysis_error(
           detail::cat("nondim: variable '", name, "' would be number ", std::to_string(max_problem_variables + 1),
-                       ": a problem takes at most ", std::to_string(max_problem_variables), " variables"),
+                      ": a problem takes at most ", std::to_string(max_problem_variables), " variables"),
           name);
   }
 

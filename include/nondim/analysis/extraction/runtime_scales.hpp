@@ -48,6 +48,7 @@
 #include <utility>
 #include <vector>
 
+#include "../../solver/core/detail/cat.hpp"
 #include "../../solver/core/dimension.hpp"
 #include "../../solver/core/format.hpp"
 #include "../../solver/core/rational.hpp"
@@ -58,7 +59,6 @@
 #include "../../solver/units/quantity_type.hpp"
 #include "../../solver/units/spelling.hpp"
 #include "../../solver/units/temperature.hpp"
-#include "../../solver/core/detail/cat.hpp"
 #include "../config.hpp"
 #include "detail/too_large.hpp"
 #include "symbols.hpp"
@@ -461,8 +461,8 @@ class runtime_scales {
   static scales_error absolute_reference(const std::string& name, std::string_view unit_text) {
     return scales_error(
         detail::cat("nondim: reference '", name, "' is given in `", std::string(unit_text.substr(0, 80)),
-                     "`, an absolute temperature; a reference temperature is a difference "
-                     "(T_wall - T_inf): give it in K, or as an interval `(degC)`"),
+                    "`, an absolute temperature; a reference temperature is a difference "
+                    "(T_wall - T_inf): give it in K, or as an interval `(degC)`"),
         name);
   }
 
@@ -480,16 +480,16 @@ class runtime_scales {
     }
     if (d.is_dimensionless())
       throw scales_error(cat("nondim: reference '", name,
-                              "' is dimensionless; a reference must bring a dimension (a dimensionless number is "
-                              "its own scale)"),
+                             "' is dimensionless; a reference must bring a dimension (a dimensionless number is "
+                             "its own scale)"),
                          name);
     std::optional<std::vector<rational>> k;
     try {
       k = detail::span_exponents(dims_, d);
     } catch (const detail::integers_too_large&) {
       throw scales_error(cat("nondim: reference '", name,
-                              "': its exponents over the references before it do not "
-                              "fit 64-bit rationals"),
+                             "': its exponents over the references before it do not "
+                             "fit 64-bit rationals"),
                          name);
     }
     if (k) {
@@ -497,9 +497,9 @@ class runtime_scales {
       for (const auto& r : refs_) names.push_back(r.name);
       const scale_expression e{d, 1.0, *k, names};
       throw scales_error(cat("nondim: the references' dimensions must be independent, but that of '", name, "' (",
-                              to_string(d), ") is the dimension of ", e.text(text_form::ascii),
-                              ", made of the references before it; drop it, or replace it by one that brings a new "
-                              "base dimension"),
+                             to_string(d), ") is the dimension of ", e.text(text_form::ascii),
+                             ", made of the references before it; drop it, or replace it by one that brings a new "
+                             "base dimension"),
                          name);
     }
     refs_.push_back(scale_reference{name, si, d, std::move(unit)});
@@ -525,11 +525,11 @@ class runtime_scales {
     const std::size_t b = detail::lacking_base(dims_, d);
     if (b == base_dimension_count)
       throw scales_error(cat("nondim: the dimension ", to_string(d), " is not a product of powers of the references (",
-                              list, "), and no single added base dimension would make it one"));
-    throw scales_error(cat("nondim: the dimension ", to_string(d), " is outside the span of the references (", list,
-                            "): they lack the base dimension ", std::string(dimension_symbol(b)),
-                            "; add a reference that carries it"),
-                       {}, b);
+                             list, "), and no single added base dimension would make it one"));
+    throw scales_error(
+        cat("nondim: the dimension ", to_string(d), " is outside the span of the references (", list,
+            "): they lack the base dimension ", std::string(dimension_symbol(b)), "; add a reference that carries it"),
+        {}, b);
   }
 
   /// (product of the positive powers, in reference order) / (product of the negative ones),
@@ -567,9 +567,10 @@ class runtime_scales {
   static parsed_unit linear_unit(std::string_view unit_text, const char* what) {
     const parsed_unit u = parse_unit(unit_text);
     if (u.offset != 0.0)
-      throw scales_error(detail::cat("nondim: `", std::string(unit_text.substr(0, 80)), "` is an absolute temperature, passed to ", what,
-           "() where a difference is meant; write nondimensional_difference(T, T_ref, unit) for theta = (T - T_ref) / "
-           "dT (or dimensional_point), or give a difference in K or `(degC)`"));
+      throw scales_error(detail::cat(
+          "nondim: `", std::string(unit_text.substr(0, 80)), "` is an absolute temperature, passed to ", what,
+          "() where a difference is meant; write nondimensional_difference(T, T_ref, unit) for theta = (T - T_ref) / "
+          "dT (or dimensional_point), or give a difference in K or `(degC)`"));
     return u;
   }
 
@@ -584,7 +585,7 @@ class runtime_scales {
   static void check_sizes(std::size_t in, std::size_t out) {
     if (in != out)
       throw scales_error(detail::cat("nondim: a field of ", std::to_string(in), " cells and an output of ",
-                                      std::to_string(out), " cells; they must be the same size"));
+                                     std::to_string(out), " cells; they must be the same size"));
   }
 
   std::vector<scale_reference> refs_;

@@ -44,7 +44,7 @@ bool reduce_with_target(const std::vector<dimension>& refs, const dimension& tar
 /// nullopt when `target` lies outside their span.
 /// \throws integers_too_large when an exponent does not fit 64-bit rationals.
 NONDIM_ANALYSIS_INLINE std::optional<std::vector<rational>> span_exponents(const std::vector<dimension>& refs,
-                                                           const dimension& target) {
+                                                                           const dimension& target) {
   return run_exact(exact_arithmetic::automatic, [&]<class F>() -> std::optional<std::vector<rational>> {
     exact_matrix<F> m(base_dimension_count, refs.size() + 1);
     if (!reduce_with_target(refs, target, m)) return std::nullopt;

@@ -40,7 +40,7 @@ struct svd_check {
 /// Euclidean norm of A·v divided by that of v, computed in double; exact groups give 0 up
 /// to the rounding of non-dyadic fractional exponents.
 [[nodiscard]] svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_group>& groups,
-                                std::size_t exact_rank);
+                                       std::size_t exact_rank);
 
 }  // namespace nondim
 

@@ -34,7 +34,7 @@ void singular_values_into(const Matrix& m, std::vector<double>& out) {
 }  // namespace detail
 
 NONDIM_ANALYSIS_INLINE svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_group>& groups,
-                                std::size_t exact_rank) {
+                                                std::size_t exact_rank) {
   constexpr std::size_t rows = base_dimension_count;
   const std::size_t cols = a.cols();
   // column-major with a fixed count of rows: the residual loops below have a constant trip count

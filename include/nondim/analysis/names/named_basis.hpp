@@ -76,9 +76,9 @@ struct named_group {
 ///         variables, a group is not dimensionless, the groups are not independent, or an
 ///         index is out of range.
 [[nodiscard]] std::vector<named_group> named_basis(std::span<const group_variable> variables,
-                                                          std::span<const std::vector<std::int64_t>> classical,
-                                                          std::size_t dependent = named_group::npos,
-                                                          std::span<const std::size_t> repeating = {});
+                                                   std::span<const std::vector<std::int64_t>> classical,
+                                                   std::size_t dependent = named_group::npos,
+                                                   std::span<const std::size_t> repeating = {});
 
 }  // namespace nondim
 

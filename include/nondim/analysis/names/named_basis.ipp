@@ -16,10 +16,10 @@
 
 #include <boost/multiprecision/cpp_int.hpp>
 
-#include "named_basis.hpp"
 #include "../../solver/core/dimension.hpp"
 #include "../../solver/core/rational.hpp"
 #include "catalog.hpp"
+#include "named_basis.hpp"
 #include "quantity_kind.hpp"
 #include "recognize.hpp"
 
@@ -306,9 +306,9 @@ std::vector<named_group> choose_named(std::span<const std::vector<std::int64_t>>
 }  // namespace detail
 
 NONDIM_ANALYSIS_INLINE std::vector<named_group> named_basis(std::span<const group_variable> variables,
-                                                          std::span<const std::vector<std::int64_t>> classical,
-                                                          std::size_t dependent,
-                                                          std::span<const std::size_t> repeating) {
+                                                            std::span<const std::vector<std::int64_t>> classical,
+                                                            std::size_t dependent,
+                                                            std::span<const std::size_t> repeating) {
   const std::size_t n = variables.size();
   if (dependent != named_group::npos && dependent >= n)
     throw std::invalid_argument("nondim: named basis: dependent index " + std::to_string(dependent) +

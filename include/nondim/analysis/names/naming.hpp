@@ -15,11 +15,11 @@
 #include <string>
 #include <vector>
 
-#include "named_basis.hpp"
 #include "../extraction/pi_group.hpp"
+#include "../extraction/result.hpp"
+#include "named_basis.hpp"
 #include "quantity_kind.hpp"
 #include "recognize.hpp"
-#include "../extraction/result.hpp"
 
 namespace nondim::detail {
 

@@ -11,14 +11,14 @@
 #include <string>
 #include <vector>
 
-#include "plan_similarity.hpp"
-#include "../../solver/core/rational.hpp"
 #include "../../solver/core/detail/cat.hpp"
+#include "../../solver/core/rational.hpp"
 #include "detail/exact.hpp"
 #include "detail/text.hpp"
 #include "detail/validate.hpp"
 #include "error.hpp"
 #include "plan.hpp"
+#include "plan_similarity.hpp"
 #include "problem.hpp"
 
 namespace nondim {
@@ -91,7 +91,6 @@ inline Eigen::VectorXd solve_lexicographic(const std::vector<std::vector<std::in
 inline std::string group_name(const group_plan& g) {
   return g.label.empty() ? g.text : g.label;
 }
-
 
 }  // namespace detail
 

@@ -13,8 +13,8 @@
 #include <utility>
 #include <vector>
 
-#include "../../solver/core/dimension.hpp"
 #include "../../solver/core/detail/cat.hpp"
+#include "../../solver/core/dimension.hpp"
 #include "error.hpp"
 
 namespace nondim {

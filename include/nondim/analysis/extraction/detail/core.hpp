@@ -13,11 +13,11 @@
 #include <utility>
 #include <vector>
 
+#include "../../../solver/core/detail/cat.hpp"
 #include "../../../solver/core/dimension.hpp"
 #include "../../../solver/core/format.hpp"
 #include "../error.hpp"
 #include "../options.hpp"
-#include "../../../solver/core/detail/cat.hpp"
 #include "exact.hpp"
 
 namespace nondim::detail {
@@ -115,10 +115,10 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     if (given.size() != out.rank) {
       std::string list;
       for (std::size_t g : given) list.append(list.empty() ? "" : ", ").append(names[g]);
-      throw analysis_error(
-          cat("nondim: ", std::to_string(given.size()), " repeating variable", given.size() == 1 ? "" : "s",
-               " given (", list, ") but the rank of the dimension matrix is ", std::to_string(out.rank), ", so ",
-               std::to_string(out.rank), " are needed"));
+      throw analysis_error(cat("nondim: ", std::to_string(given.size()), " repeating variable",
+                               given.size() == 1 ? "" : "s", " given (", list,
+                               ") but the rank of the dimension matrix is ", std::to_string(out.rank), ", so ",
+                               std::to_string(out.rank), " are needed"));
     }
     for (std::size_t k = 0; k < given.size(); ++k) {
       if (pivots[k] == k) continue;
@@ -132,8 +132,8 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
       }
       const std::string& who = names[given[k]];
       throw analysis_error(cat("nondim: the repeating variables must have independent dimensions, but that of '", who,
-                                "' (", to_string(dims[given[k]]), ") is the dimension of ", product_text(used, used_e),
-                                ", made of the repeating variables before it"),
+                               "' (", to_string(dims[given[k]]), ") is the dimension of ", product_text(used, used_e),
+                               ", made of the repeating variables before it"),
                            who);
     }
   }
@@ -157,8 +157,8 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     try {
       out.groups.push_back(echelon_null_vector(ech, c, std::span<const std::size_t>(order), n));
     } catch (const integers_too_large& e) {
-      throw analysis_error(cat("nondim: the group of '", names[head], "' needs an exponent beyond 64 bits (",
-                                e.example, "); the exact answer cannot be given as int64 exponents"),
+      throw analysis_error(cat("nondim: the group of '", names[head], "' needs an exponent beyond 64 bits (", e.example,
+                               "); the exact answer cannot be given as int64 exponents"),
                            names[head]);
     }
     out.heads.push_back(head);

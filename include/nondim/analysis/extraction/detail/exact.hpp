@@ -25,7 +25,6 @@ namespace nondim::detail {
 using big_rational = boost::multiprecision::cpp_rational;
 using big_integer = boost::multiprecision::cpp_int;
 
-
 // ---- the field operations the elimination needs, for both fields -----------------------
 
 template <class F>

@@ -10,11 +10,11 @@
 #include <string>
 #include <vector>
 
+#include "../../../solver/core/detail/cat.hpp"
 #include "../../../solver/core/dimension.hpp"
 #include "../../../solver/core/format.hpp"
 #include "../error.hpp"
 #include "../problem.hpp"
-#include "../../../solver/core/detail/cat.hpp"
 #include "exact.hpp"
 #include "text.hpp"
 
