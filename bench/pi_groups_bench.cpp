@@ -8,8 +8,8 @@
 // The cell values are a scenario of our own (air and water around bodies of a few cm).
 // Before timing, main() checks that each pair gives bit-identical outputs on every cell.
 #include <benchmark/benchmark.h>
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 
 #include <cmath>
 #include <cstddef>

@@ -4,8 +4,8 @@
 // Expected exponents: the textbook groups cited in tests/textbook_problems.hpp, brought to the
 // classical form of DESIGN.md by hand, and re-derived independently with python3-sympy by
 // tests/sympy/classical_basis.py (exact rationals, same rule). Both agree for every problem.
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 
 #include <doctest/doctest.h>
 

@@ -1,8 +1,8 @@
 // Tests of nondim/analysis/extraction/runtime_scales.hpp: reference scales from named references given
 // at run time (values with unit text, as an input file gives them).
-#include <nondim/solver.hpp>
 #include <nondim/analysis/extraction/runtime_scales.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 
 #include <doctest/doctest.h>
 

@@ -1,7 +1,7 @@
 // Tests of nondim/solver/groups/scales.hpp: reference scales for nondimensional solvers, exponents
 // fixed at compile time.
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 
 #include <doctest/doctest.h>
 

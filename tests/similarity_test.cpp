@@ -3,9 +3,9 @@
 // Reynolds number rho V L / mu, Froude number V/sqrt(g L) as V^2/(g L), Mach number V/c,
 // the turbomachine flow, head and power coefficients), and every expected value comes from
 // the textbook scaling formula it states, evaluated here independently of the solver.
-#include <nondim/solver/groups/pi_groups.hpp>
 #include <nondim/quantity.hpp>
 #include <nondim/similarity.hpp>
+#include <nondim/solver/groups/pi_groups.hpp>
 
 #include <doctest/doctest.h>
 #include <Eigen/Dense>  // the reference solution of one check is computed independently here

@@ -1,8 +1,8 @@
 // A raw number among the arguments of pi_groups: its dimension is unknown.
 // expect: nondim: pi_groups takes quantities
 // expect: not_a_quantity<3, double>
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 using namespace nondim;
 int main() {
   const auto f = 12.0 * units::Hz;

@@ -3,8 +3,8 @@
 // expect: nondim: these variables form no dimensionless group
 // expect: L<1>, nondim::spelled::M<1>, nondim::spelled::T<-2>
 // expect: L<-3>, nondim::spelled::M<1>
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 using namespace nondim;
 int main() {
   const auto F = 2.0 * units::N;

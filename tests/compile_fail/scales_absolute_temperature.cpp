@@ -2,8 +2,8 @@
 // the reference point, so nondimensional(T) is refused.
 // expect: nondim: an absolute temperature \(temperature_point\) was passed where a difference is meant
 // expect: Theta<1>
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 using namespace nondim;
 int main() {
   const auto T_inf = from_celsius(25.0);

@@ -1,8 +1,8 @@
 // An absolute temperature given as a reference scale: a scale is a difference (dT).
 // expect: nondim: a reference temperature for scales\(\) is a difference
 // expect: not_a_quantity<2, nondim::temperature_point<double> ?>
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 using namespace nondim;
 int main() {
   const auto T_inf = from_celsius(25.0);

@@ -2,8 +2,8 @@
 // and L already given it fixes nothing new. The error names the fourth reference.
 // expect: nondim: the references' dimensions must be independent
 // expect: dependent_reference<4, nondim::spelled::dim<nondim::spelled::L<-1>, nondim::spelled::M<1>, .*T<-1>
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 using namespace nondim;
 int main() {
   const auto rho = 998.0 * units::kg / units::m3;

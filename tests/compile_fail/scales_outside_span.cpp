@@ -2,8 +2,8 @@
 // heat flux per kelvin (a heat-transfer coefficient) needs a temperature reference.
 // expect: nondim: this dimension is outside the span of the references
 // expect: references_lack<nondim::spelled::dim<nondim::spelled::Theta<1> ?> ?>
-#include <nondim/solver.hpp>
 #include <nondim/quantity.hpp>
+#include <nondim/solver.hpp>
 using namespace nondim;
 int main() {
   const auto s = scales(998.0 * units::kg / units::m3, 0.3 * units::m / units::s, 0.05 * units::m);
