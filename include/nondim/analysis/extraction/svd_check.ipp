@@ -9,6 +9,7 @@
 #include <limits>
 #include <vector>
 
+#include <Eigen/QR>
 #include <Eigen/SVD>
 
 #include "svd_check.hpp"
@@ -17,17 +18,24 @@ namespace nondim {
 
 namespace detail {
 
-/// Singular values of `m`, descending. Matrices of up to `small_columns` columns (every
-/// problem a person writes) live on the stack: no allocation, the same Jacobi rotations.
+/// Singular values of `m` (7 rows), descending, from one instantiation of JacobiSVD: a
+/// matrix of up to `small_columns` columns (every problem a person writes) directly, on the
+/// stack; a wider one through the 7 x 7 triangle R of the QR factorisation of its transpose
+/// (m^T = Q R, so m and R^T have the same singular values), which is what JacobiSVD's own
+/// QR preconditioner does for a wide matrix. One instantiation instead of two: the SVD was
+/// most of the cost of compiling the analysis half.
 template <class Matrix>
 void singular_values_into(const Matrix& m, std::vector<double>& out) {
   constexpr Eigen::Index small_columns = 32;
+  using small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, base_dimension_count, small_columns>;
   const auto take = [&out](const auto& s) { out.assign(s.data(), s.data() + s.size()); };
   if (m.cols() <= small_columns) {
-    using small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, base_dimension_count, small_columns>;
     take(Eigen::JacobiSVD<small>(small(m)).singularValues());
   } else {
-    take(Eigen::JacobiSVD<Eigen::MatrixXd>(Eigen::MatrixXd(m)).singularValues());
+    const Eigen::HouseholderQR<Eigen::MatrixXd> qr(m.transpose());
+    const Eigen::Index k = m.rows();
+    const small r = qr.matrixQR().topLeftCorner(k, k).template triangularView<Eigen::Upper>();
+    take(Eigen::JacobiSVD<small>(r).singularValues());
   }
 }
 
