@@ -39,8 +39,40 @@ concept scalar = std::is_arithmetic_v<T>;
 /// read one in a unit (`q / units::ft`, `q.in(units::ft)`) or in SI (`q.si()`).
 /// \tparam D   its dimension
 /// \tparam Rep the number type (double by default)
+namespace detail {
+
+/// A dimensionless quantity is a number: its conversion to `Rep` lives in this base, so that a
+/// quantity of any other dimension has no conversion function that Clang would try in every
+/// built-in arithmetic candidate of every operator (bench/RESULTS.md, section 2).
+template <class Q, class Rep>
+struct number_conversion {
+  NONDIM_ALWAYS_INLINE constexpr operator Rep() const noexcept {  // NOLINT(google-explicit-constructor)
+    return static_cast<const Q&>(*this).si();
+  }
+};
+
+/// Refused: a dimensional value is not a number until divided by a unit. A template: Clang
+/// does not count conversion templates when it decides which built-in operators to try.
 template <dimension D, class Rep>
-class quantity {
+struct no_number_conversion {
+  template <class T>
+  requires std::is_arithmetic_v<T>
+  constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
+    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                  "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
+                  "(`q / units::m`) or read `q.si()`");
+    return T{};
+  }
+};
+
+template <dimension D, class Rep>
+using quantity_base =
+    std::conditional_t<D.is_dimensionless(), number_conversion<quantity<D, Rep>, Rep>, no_number_conversion<D, Rep>>;
+
+}  // namespace detail
+
+template <dimension D, class Rep>
+class quantity : public detail::quantity_base<D, Rep> {
  public:
   using rep = Rep;
   static constexpr dimension dim = D;
@@ -81,23 +113,6 @@ class quantity {
 
   /// \brief The value in coherent SI units.
   [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr Rep si() const noexcept { return value_; }
-
-  /// \brief A dimensionless value is a number.
-  NONDIM_ALWAYS_INLINE constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
-      requires(D.is_dimensionless()) {
-    return value_;
-  }
-  /// Refused: a dimensional value is not a number until divided by a unit. Deliberately not
-  /// a template: a conversion template lets Clang try every built-in arithmetic operator on
-  /// every quantity expression (most of the front-end time of quantity code; bench/RESULTS.md).
-  /// Conversions to other arithmetic types go through Rep and end here too.
-  NONDIM_ALWAYS_INLINE constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
-      requires(!D.is_dimensionless()) {
-    static_assert(detail::dimensions_involved<detail::spell<D>, Rep>,
-                  "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
-                  "(`q / units::m`) or read `q.si()`");
-    return Rep{};
-  }
 
   NONDIM_ALWAYS_INLINE constexpr quantity operator+() const noexcept { return *this; }
   NONDIM_ALWAYS_INLINE constexpr quantity operator-() const noexcept { return from_si(-value_); }
