@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Instruction counts (callgrind Ir, deterministic) of the wall heat-transfer kernel written on
-# nondim quantities and on raw double, at -O2, with each compiler found.
+# nondim quantities and on raw double, at -O2 (and -O0 with --opt), with each compiler found.
 #
 #   bench/callgrind_compare.sh [--cells N] [--compilers "g++ clang++"] [--opt "-O2 -O0"] [--include DIR]
 #                              [--work DIR] [--strict]
@@ -35,7 +35,7 @@ while [[ $# -gt 0 ]]; do
     --include) include=$(realpath "$2"); shift 2 ;;
     --opt) opts=$2; shift 2 ;;
     --strict) strict=1; shift ;;
-    -h|--help) sed -n '2,22p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,19p' "$0"; exit 0 ;;
     *) echo "callgrind_compare.sh: unknown argument '$1' (see --help)" >&2; exit 2 ;;
   esac
 done

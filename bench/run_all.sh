@@ -10,7 +10,7 @@
 #   --min-time     --benchmark_min_time per benchmark, seconds (default 0.1)
 #   --repetitions  --benchmark_repetitions, medians are taken over them (default 5)
 #   --cells        cells for callgrind_compare.sh (default 100000)
-#   --runs         compiles per translation unit in compile_cost.py (default 5)
+#   --runs         compiles per translation unit in compile_cost.py and header_cost.py (default 5)
 #
 # Needs: cmake, a C++20 compiler (g++ 12 / clang++ 14), Google Benchmark (Debian libbenchmark-dev),
 # valgrind, /usr/bin/python3. Logs of every step go to <build-dir>/bench-logs/.
@@ -32,7 +32,7 @@ while [[ $# -gt 0 ]]; do
     --repetitions) reps=$2; shift 2 ;;
     --cells) cells=$2; shift 2 ;;
     --runs) runs=$2; shift 2 ;;
-    -h|--help) sed -n '2,18p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,16p' "$0"; exit 0 ;;
     *) echo "run_all.sh: unknown argument '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
