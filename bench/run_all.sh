@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
-# Build and run every nondim benchmark, then the instruction-count and compile-cost scripts,
-# and print the ratios at the end. Installs nothing: fails with a message if a tool is missing.
+# Build and run every nondim benchmark, then the instruction-count (-O2 and -O0), compile-cost and
+# header-cost scripts, and print the ratios at the end. Installs nothing: fails with a message if a
+# tool is missing.
 #
 #   bench/run_all.sh [--build-dir DIR] [--jobs N] [--min-time S] [--repetitions N] [--cells N] [--runs N]
 #
@@ -9,7 +10,7 @@
 #   --min-time     --benchmark_min_time per benchmark, seconds (default 0.1)
 #   --repetitions  --benchmark_repetitions, medians are taken over them (default 5)
 #   --cells        cells for callgrind_compare.sh (default 100000)
-#   --runs         compiles per translation unit in compile_cost.py (default 5)
+#   --runs         compiles per translation unit in compile_cost.py and header_cost.py (default 5)
 #
 # Needs: cmake, a C++20 compiler (g++ 12 / clang++ 14), Google Benchmark (Debian libbenchmark-dev),
 # valgrind, /usr/bin/python3. Logs of every step go to <build-dir>/bench-logs/.
@@ -31,7 +32,7 @@ while [[ $# -gt 0 ]]; do
     --repetitions) reps=$2; shift 2 ;;
     --cells) cells=$2; shift 2 ;;
     --runs) runs=$2; shift 2 ;;
-    -h|--help) sed -n '2,17p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,16p' "$0"; exit 0 ;;
     *) echo "run_all.sh: unknown argument '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
@@ -94,13 +95,17 @@ for exe in "${benches[@]}"; do
       "$logs/$name.log")
 done
 
-step "instruction counts (callgrind)"
-"$here/callgrind_compare.sh" --cells "$cells" 2>&1 | tee "$logs/callgrind.log"
+step "instruction counts (callgrind), -O2 and -O0"
+"$here/callgrind_compare.sh" --cells "$cells" --opt "-O2 -O0" 2>&1 | tee "$logs/callgrind.log"
 while IFS= read -r line; do summaries+=("callgrind: $line"); done < <(grep -E '^(g\+\+|clang\+\+) ' "$logs/callgrind.log" || true)
 
 step "compile cost"
 /usr/bin/python3 "$here/compile_cost.py" --runs "$runs" 2>&1 | tee "$logs/compile_cost.log"
 while IFS= read -r line; do summaries+=("compile: $line"); done < <(grep '^summary:' "$logs/compile_cost.log" || true)
+
+step "compile cost of each solver-half header alone"
+/usr/bin/python3 "$here/header_cost.py" --runs "$runs" --markdown 2>&1 | tee "$logs/header_cost.log" || broken+=("header_cost.py")
+while IFS= read -r line; do summaries+=("headers: $line"); done < <(grep '^summary:' "$logs/header_cost.log" || true)
 
 step "ratios"
 printf '%s\n' "${summaries[@]}"

@@ -15,7 +15,7 @@ namespace detail {
 
 /// x^n by squaring (exact in the same cases as repeated multiplication).
 template <class R>
-constexpr R ipow(R x, std::int64_t n) noexcept {
+NONDIM_ALWAYS_INLINE constexpr R ipow(R x, std::int64_t n) noexcept {
   const bool inv = n < 0;
   std::uint64_t m = inv ? 0 - static_cast<std::uint64_t>(n) : static_cast<std::uint64_t>(n);
   R r = 1;
@@ -30,7 +30,7 @@ constexpr R ipow(R x, std::int64_t n) noexcept {
 /// r * x^M by the same squaring as `ipow`, unrolled at compile time: GCC 12 at -O2 keeps the
 /// loop form for M >= 4 (a counted loop per call), which a hand-written x*x*x*x does not pay.
 template <std::uint64_t M, class R>
-constexpr R upow(R r, R x) noexcept {
+NONDIM_ALWAYS_INLINE constexpr R upow(R r, R x) noexcept {
   if constexpr (M == 0) {
     return r;
   } else if constexpr ((M & 1U) != 0) {
@@ -41,7 +41,7 @@ constexpr R upow(R r, R x) noexcept {
 }
 /// x^N for a compile-time N; the same products, in the same order, as `ipow(x, N)`.
 template <std::int64_t N, class R>
-constexpr R ipow(R x) noexcept {
+NONDIM_ALWAYS_INLINE constexpr R ipow(R x) noexcept {
   if constexpr (N < 0) {
     return R{1} / upow<0 - static_cast<std::uint64_t>(N)>(R{1}, x);
   } else {
@@ -67,8 +67,8 @@ constexpr R const_root(R x, std::int64_t m) noexcept {
 }
 
 template <class R>
-constexpr R root(R x, std::int64_t m) noexcept {
-  if (std::is_constant_evaluated()) return const_root(x, m);
+NONDIM_ALWAYS_INLINE constexpr R root(R x, std::int64_t m) noexcept {
+  if (__builtin_is_constant_evaluated()) return const_root(x, m);
   if (m == 2) return std::sqrt(x);
   if (m == 3) return std::cbrt(x);
   if (x < R{0} && m % 2 == 1) return -std::pow(-x, R{1} / static_cast<R>(m));
@@ -84,7 +84,7 @@ constexpr R root(R x, std::int64_t m) noexcept {
 /// a real cube root), then multiplication; any other exponent is one `std::pow(x, N / M)`, as
 /// a solver writes `std::pow(Re, 0.8)`, so a negative base gives NaN there, like `std::pow`.
 template <std::int64_t N, std::int64_t M = 1, dimension D, class R>
-constexpr quantity<pow(D, rational{N, M}), R> pow(const quantity<D, R>& q) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<pow(D, rational{N, M}), R> pow(const quantity<D, R>& q) noexcept {
   constexpr rational p{N, M};
   using result = quantity<pow(D, p), R>;
   const R x = q.si();
@@ -93,7 +93,7 @@ constexpr quantity<pow(D, rational{N, M}), R> pow(const quantity<D, R>& q) noexc
   } else if constexpr (p.den <= 3) {
     return result::from_si(detail::ipow<p.num>(detail::root(x, p.den)));
   } else {
-    if (std::is_constant_evaluated()) {
+    if (__builtin_is_constant_evaluated()) {
       if (x < R{0}) return result::from_si(std::numeric_limits<R>::quiet_NaN());
       return result::from_si(detail::ipow<p.num>(detail::const_root(x, p.den)));
     }
@@ -101,29 +101,29 @@ constexpr quantity<pow(D, rational{N, M}), R> pow(const quantity<D, R>& q) noexc
   }
 }
 template <dimension D, class R>
-constexpr auto sqrt(const quantity<D, R>& q) noexcept {
+NONDIM_ALWAYS_INLINE constexpr auto sqrt(const quantity<D, R>& q) noexcept {
   return pow<1, 2>(q);
 }
 template <dimension D, class R>
-constexpr auto cbrt(const quantity<D, R>& q) noexcept {
+NONDIM_ALWAYS_INLINE constexpr auto cbrt(const quantity<D, R>& q) noexcept {
   return pow<1, 3>(q);
 }
 
 template <dimension D, class R>
-constexpr quantity<D, R> abs(const quantity<D, R>& q) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> abs(const quantity<D, R>& q) noexcept {
   return quantity<D, R>::from_si(q.si() < R{0} ? -q.si() : q.si());
 }
 template <dimension D, class R>
-constexpr quantity<D, R> min(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> min(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
   return b < a ? b : a;
 }
 template <dimension D, class R>
-constexpr quantity<D, R> max(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> max(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
   return a < b ? b : a;
 }
 template <dimension D, class R>
-constexpr quantity<D, R> hypot(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
-  if (std::is_constant_evaluated())
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> hypot(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+  if (__builtin_is_constant_evaluated())
     return quantity<D, R>::from_si(detail::const_root(a.si() * a.si() + b.si() * b.si(), 2));
   return quantity<D, R>::from_si(std::hypot(a.si(), b.si()));
 }
@@ -149,7 +149,7 @@ requires(D1 != D2) constexpr quantity<D1, R1> max(const quantity<D1, R1>&, const
 // Transcendental functions: a dimensionless argument, or a compile error naming the dimension.
 #define NONDIM_DIMENSIONLESS_FUNCTION(fn)                                                               \
   template <class R>                                                                                    \
-  inline R fn(const quantity<dims::dimensionless, R>& q) noexcept {                                     \
+  NONDIM_ALWAYS_INLINE R fn(const quantity<dims::dimensionless, R>& q) noexcept {                       \
     return std::fn(q.si());                                                                             \
   }                                                                                                     \
   template <dimension D, class R>                                                                       \
@@ -178,7 +178,7 @@ NONDIM_DIMENSIONLESS_FUNCTION(erf)
 
 /// \brief atan2 of two quantities of the same dimension (the angle of a vector).
 template <dimension D, class R>
-inline R atan2(const quantity<D, R>& y, const quantity<D, R>& x) noexcept {
+NONDIM_ALWAYS_INLINE R atan2(const quantity<D, R>& y, const quantity<D, R>& x) noexcept {
   return std::atan2(y.si(), x.si());
 }
 

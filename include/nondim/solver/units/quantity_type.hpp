@@ -8,6 +8,7 @@
 #include <type_traits>
 
 #include "../core/dims.hpp"
+#include "../core/inline.hpp"
 #include "spelling.hpp"
 
 namespace nondim {
@@ -38,8 +39,40 @@ concept scalar = std::is_arithmetic_v<T>;
 /// read one in a unit (`q / units::ft`, `q.in(units::ft)`) or in SI (`q.si()`).
 /// \tparam D   its dimension
 /// \tparam Rep the number type (double by default)
+namespace detail {
+
+/// A dimensionless quantity is a number: its conversion to `Rep` lives in this base, so that a
+/// quantity of any other dimension has no conversion function that Clang would try in every
+/// built-in arithmetic candidate of every operator (bench/RESULTS.md, section 2).
+template <class Q, class Rep>
+struct number_conversion {
+  NONDIM_ALWAYS_INLINE constexpr operator Rep() const noexcept {  // NOLINT(google-explicit-constructor)
+    return static_cast<const Q&>(*this).si();
+  }
+};
+
+/// Refused: a dimensional value is not a number until divided by a unit. A template: Clang
+/// does not count conversion templates when it decides which built-in operators to try.
 template <dimension D, class Rep>
-class quantity {
+struct no_number_conversion {
+  template <class T>
+  requires std::is_arithmetic_v<T>
+  constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
+    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+                  "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
+                  "(`q / units::m`) or read `q.si()`");
+    return T{};
+  }
+};
+
+template <dimension D, class Rep>
+using quantity_base =
+    std::conditional_t<D.is_dimensionless(), number_conversion<quantity<D, Rep>, Rep>, no_number_conversion<D, Rep>>;
+
+}  // namespace detail
+
+template <dimension D, class Rep>
+class quantity : public detail::quantity_base<D, Rep> {
  public:
   using rep = Rep;
   static constexpr dimension dim = D;
@@ -47,10 +80,12 @@ class quantity {
   constexpr quantity() noexcept = default;
 
   /// \brief A quantity from its value in coherent SI units.
-  [[nodiscard]] static constexpr quantity from_si(Rep si_value) noexcept { return quantity(si_value, tag{}); }
+  [[nodiscard]] NONDIM_ALWAYS_INLINE static constexpr quantity from_si(Rep si_value) noexcept {
+    return quantity(si_value, tag{});
+  }
 
   /// \brief A dimensionless value from a number (implicit: it is a number).
-  constexpr quantity(Rep v) noexcept  // NOLINT(google-explicit-constructor)
+  NONDIM_ALWAYS_INLINE constexpr quantity(Rep v) noexcept  // NOLINT(google-explicit-constructor)
       requires(D.is_dimensionless())
       : value_(v) {}
 
@@ -77,43 +112,26 @@ class quantity {
   }
 
   /// \brief The value in coherent SI units.
-  [[nodiscard]] constexpr Rep si() const noexcept { return value_; }
+  [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr Rep si() const noexcept { return value_; }
 
-  /// \brief A dimensionless value is a number.
-  constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
-      requires(D.is_dimensionless()) {
-    return value_;
-  }
-  /// Refused: a dimensional value is not a number until divided by a unit. Deliberately not
-  /// a template: a conversion template lets Clang try every built-in arithmetic operator on
-  /// every quantity expression (most of the front-end time of quantity code; bench/RESULTS.md).
-  /// Conversions to other arithmetic types go through Rep and end here too.
-  constexpr operator Rep() const noexcept  // NOLINT(google-explicit-constructor)
-      requires(!D.is_dimensionless()) {
-    static_assert(detail::dimensions_involved<detail::spell<D>, Rep>,
-                  "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
-                  "(`q / units::m`) or read `q.si()`");
-    return Rep{};
-  }
+  NONDIM_ALWAYS_INLINE constexpr quantity operator+() const noexcept { return *this; }
+  NONDIM_ALWAYS_INLINE constexpr quantity operator-() const noexcept { return from_si(-value_); }
 
-  constexpr quantity operator+() const noexcept { return *this; }
-  constexpr quantity operator-() const noexcept { return from_si(-value_); }
-
-  constexpr quantity& operator+=(const quantity& o) noexcept {
+  NONDIM_ALWAYS_INLINE constexpr quantity& operator+=(const quantity& o) noexcept {
     value_ += o.value_;
     return *this;
   }
-  constexpr quantity& operator-=(const quantity& o) noexcept {
+  NONDIM_ALWAYS_INLINE constexpr quantity& operator-=(const quantity& o) noexcept {
     value_ -= o.value_;
     return *this;
   }
   template <scalar T>
-  constexpr quantity& operator*=(T s) noexcept {
+  NONDIM_ALWAYS_INLINE constexpr quantity& operator*=(T s) noexcept {
     value_ *= s;
     return *this;
   }
   template <scalar T>
-  constexpr quantity& operator/=(T s) noexcept {
+  NONDIM_ALWAYS_INLINE constexpr quantity& operator/=(T s) noexcept {
     value_ /= s;
     return *this;
   }
@@ -132,26 +150,26 @@ class quantity {
 
  private:
   struct tag {};
-  constexpr quantity(Rep v, tag) noexcept : value_(v) {}
+  NONDIM_ALWAYS_INLINE constexpr quantity(Rep v, tag) noexcept : value_(v) {}
   Rep value_{};
 };
 
 // ---- same-dimension arithmetic and comparison ------------------------------------------
 
 template <dimension D, class R>
-constexpr quantity<D, R> operator+(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator+(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
   return quantity<D, R>::from_si(a.si() + b.si());
 }
 template <dimension D, class R>
-constexpr quantity<D, R> operator-(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator-(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
   return quantity<D, R>::from_si(a.si() - b.si());
 }
 template <dimension D, class R>
-constexpr bool operator==(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr bool operator==(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
   return a.si() == b.si();
 }
 template <dimension D, class R>
-constexpr auto operator<=>(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr auto operator<=>(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
   return a.si() <=> b.si();
 }
 
@@ -185,33 +203,35 @@ requires(D1 != D2) constexpr std::partial_ordering operator<=>(const quantity<D1
 // ---- products and quotients combine dimensions ------------------------------------------
 
 template <dimension D1, dimension D2, class R>
-constexpr quantity<D1 * D2, R> operator*(const quantity<D1, R>& a, const quantity<D2, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, R> operator*(const quantity<D1, R>& a,
+                                                              const quantity<D2, R>& b) noexcept {
   return quantity<D1 * D2, R>::from_si(a.si() * b.si());
 }
 template <dimension D1, dimension D2, class R>
-constexpr quantity<D1 / D2, R> operator/(const quantity<D1, R>& a, const quantity<D2, R>& b) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, R> operator/(const quantity<D1, R>& a,
+                                                              const quantity<D2, R>& b) noexcept {
   return quantity<D1 / D2, R>::from_si(a.si() / b.si());
 }
 template <dimension D, class R, scalar T>
-constexpr quantity<D, R> operator*(const quantity<D, R>& a, T s) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator*(const quantity<D, R>& a, T s) noexcept {
   return quantity<D, R>::from_si(a.si() * static_cast<R>(s));
 }
 template <dimension D, class R, scalar T>
-constexpr quantity<D, R> operator*(T s, const quantity<D, R>& a) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator*(T s, const quantity<D, R>& a) noexcept {
   return quantity<D, R>::from_si(static_cast<R>(s) * a.si());
 }
 template <dimension D, class R, scalar T>
-constexpr quantity<D, R> operator/(const quantity<D, R>& a, T s) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator/(const quantity<D, R>& a, T s) noexcept {
   return quantity<D, R>::from_si(a.si() / static_cast<R>(s));
 }
 template <dimension D, class R, scalar T>
-constexpr quantity<dims::dimensionless / D, R> operator/(T s, const quantity<D, R>& a) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<dims::dimensionless / D, R> operator/(T s, const quantity<D, R>& a) noexcept {
   return quantity<dims::dimensionless / D, R>::from_si(static_cast<R>(s) / a.si());
 }
 
 /// \brief A quantity whose type is deduced from a dimension value: `si<dims::force>(12.0)`.
 template <dimension D, class Rep>
-constexpr quantity<D, Rep> si(Rep value) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, Rep> si(Rep value) noexcept {
   return quantity<D, Rep>::from_si(value);
 }
 

@@ -75,11 +75,11 @@ constexpr unit_entry plain(std::string_view s, std::string_view n, double f, dim
   return {s, n, f, d, false, no_decade, 0.0, src};
 }
 
-inline constexpr const char* brochure_t2 = "SI Brochure 9th ed., table 2";
-inline constexpr const char* brochure_t4 = "SI Brochure 9th ed., table 4";
-inline constexpr const char* brochure_t8 = "SI Brochure 9th ed., table 8";
-inline constexpr const char* nist_b8 = "NIST SP 811 (2008), Appendix B.8";
-inline constexpr const char* nist_b9 = "NIST SP 811 (2008), Appendix B.9";
+inline constexpr std::string_view brochure_t2 = "SI Brochure 9th ed., table 2";
+inline constexpr std::string_view brochure_t4 = "SI Brochure 9th ed., table 4";
+inline constexpr std::string_view brochure_t8 = "SI Brochure 9th ed., table 8";
+inline constexpr std::string_view nist_b8 = "NIST SP 811 (2008), Appendix B.8";
+inline constexpr std::string_view nist_b9 = "NIST SP 811 (2008), Appendix B.9";
 
 }  // namespace detail
 

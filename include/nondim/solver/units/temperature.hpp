@@ -34,49 +34,60 @@ class temperature_point {
 
   constexpr temperature_point() noexcept = default;
   /// \brief From kelvin, as a quantity (an absolute value, not a difference).
-  static constexpr temperature_point from_kelvin(difference absolute) noexcept {
+  NONDIM_ALWAYS_INLINE static constexpr temperature_point from_kelvin(difference absolute) noexcept {
     return temperature_point(absolute.si());
   }
-  static constexpr temperature_point from_kelvin(Rep kelvin) noexcept { return temperature_point(kelvin); }
-  static constexpr temperature_point from_celsius(Rep c) noexcept {
+  NONDIM_ALWAYS_INLINE static constexpr temperature_point from_kelvin(Rep kelvin) noexcept {
+    return temperature_point(kelvin);
+  }
+  NONDIM_ALWAYS_INLINE static constexpr temperature_point from_celsius(Rep c) noexcept {
     return temperature_point(c + static_cast<Rep>(detail::celsius_offset));
   }
-  static constexpr temperature_point from_fahrenheit(Rep f) noexcept {
+  NONDIM_ALWAYS_INLINE static constexpr temperature_point from_fahrenheit(Rep f) noexcept {
     return temperature_point(f * static_cast<Rep>(detail::fahrenheit_factor) +
                              static_cast<Rep>(detail::fahrenheit_offset));
   }
 
   /// \brief The thermodynamic temperature T as a quantity in kelvin, for formulas like p = ρRT.
-  [[nodiscard]] constexpr difference absolute() const noexcept { return difference::from_si(kelvin_); }
-  [[nodiscard]] constexpr Rep kelvin() const noexcept { return kelvin_; }
-  [[nodiscard]] constexpr Rep celsius() const noexcept { return kelvin_ - static_cast<Rep>(detail::celsius_offset); }
-  [[nodiscard]] constexpr Rep fahrenheit() const noexcept {
+  [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr difference absolute() const noexcept {
+    return difference::from_si(kelvin_);
+  }
+  [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr Rep kelvin() const noexcept { return kelvin_; }
+  [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr Rep celsius() const noexcept {
+    return kelvin_ - static_cast<Rep>(detail::celsius_offset);
+  }
+  [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr Rep fahrenheit() const noexcept {
     return (kelvin_ - static_cast<Rep>(detail::fahrenheit_offset)) / static_cast<Rep>(detail::fahrenheit_factor);
   }
 
-  friend constexpr difference operator-(const temperature_point& a, const temperature_point& b) noexcept {
+  NONDIM_ALWAYS_INLINE friend constexpr difference operator-(const temperature_point& a,
+                                                             const temperature_point& b) noexcept {
     return difference::from_si(a.kelvin_ - b.kelvin_);
   }
-  friend constexpr temperature_point operator+(const temperature_point& a, const difference& d) noexcept {
+  NONDIM_ALWAYS_INLINE friend constexpr temperature_point operator+(const temperature_point& a,
+                                                                    const difference& d) noexcept {
     return temperature_point(a.kelvin_ + d.si());
   }
-  friend constexpr temperature_point operator+(const difference& d, const temperature_point& a) noexcept {
+  NONDIM_ALWAYS_INLINE friend constexpr temperature_point operator+(const difference& d,
+                                                                    const temperature_point& a) noexcept {
     return temperature_point(a.kelvin_ + d.si());
   }
-  friend constexpr temperature_point operator-(const temperature_point& a, const difference& d) noexcept {
+  NONDIM_ALWAYS_INLINE friend constexpr temperature_point operator-(const temperature_point& a,
+                                                                    const difference& d) noexcept {
     return temperature_point(a.kelvin_ - d.si());
   }
   friend constexpr bool operator==(const temperature_point&, const temperature_point&) noexcept = default;
   friend constexpr auto operator<=>(const temperature_point&, const temperature_point&) noexcept = default;
 
  private:
-  constexpr explicit temperature_point(Rep k) noexcept : kelvin_(k) {}
+  NONDIM_ALWAYS_INLINE constexpr explicit temperature_point(Rep k) noexcept : kelvin_(k) {}
   Rep kelvin_{};
 };
 
 /// Refused: two absolute temperatures do not add (20 °C + 30 °C has no meaning).
 template <class R>
-constexpr temperature_point<R> operator+(const temperature_point<R>&, const temperature_point<R>&) noexcept {
+NONDIM_ALWAYS_INLINE constexpr temperature_point<R> operator+(const temperature_point<R>&,
+                                                              const temperature_point<R>&) noexcept {
   static_assert(detail::dimensions_involved<spelled::dim<spelled::Theta<1>>, spelled::dim<spelled::Theta<1>>, R>,
                 "nondim: two absolute temperatures cannot be added; subtract them for a difference, or add a "
                 "difference (quantity<dims::temperature>) to one");
@@ -84,15 +95,15 @@ constexpr temperature_point<R> operator+(const temperature_point<R>&, const temp
 }
 
 /// \brief 20 °C as an absolute temperature.
-constexpr temperature_point<double> from_celsius(double c) noexcept {
+NONDIM_ALWAYS_INLINE constexpr temperature_point<double> from_celsius(double c) noexcept {
   return temperature_point<double>::from_celsius(c);
 }
 /// \brief 68 °F as an absolute temperature.
-constexpr temperature_point<double> from_fahrenheit(double f) noexcept {
+NONDIM_ALWAYS_INLINE constexpr temperature_point<double> from_fahrenheit(double f) noexcept {
   return temperature_point<double>::from_fahrenheit(f);
 }
 /// \brief 293.15 K as an absolute temperature.
-constexpr temperature_point<double> from_kelvin(double k) noexcept {
+NONDIM_ALWAYS_INLINE constexpr temperature_point<double> from_kelvin(double k) noexcept {
   return temperature_point<double>::from_kelvin(k);
 }
 
