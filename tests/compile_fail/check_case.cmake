@@ -1,7 +1,10 @@
-# Run by ctest: cmake -DCXX=... -DSOURCE=... -DINCLUDES=... -P check_case.cmake
+# Run by ctest: cmake -DCXX=... -DSOURCE=... -DINCLUDES=... [-DDEFINES=...] -P check_case.cmake
 set(flags -std=c++20 -fsyntax-only -Wall -Wextra -Werror)
 foreach(dir IN LISTS INCLUDES)
   list(APPEND flags -isystem ${dir})
+endforeach()
+foreach(def IN LISTS DEFINES)
+  list(APPEND flags -D${def})
 endforeach()
 
 execute_process(COMMAND ${CXX} ${flags} -DNONDIM_CONTROL ${SOURCE} RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE out)

@@ -1,5 +1,14 @@
 // An outside project using nondim's public contract (DESIGN.md), built against nondim
-// either installed (find_package) or as a subdirectory.
+// installed (find_package, pkg-config) or as a subdirectory; header-only (nondim::nondim)
+// or with the analysis half compiled once (NONDIM_CONSUMER_COMPILED: nondim::compiled, or
+// NONDIM_SEPARATE_COMPILATION and one source that includes <nondim/implementation.ipp>).
+#if defined(NONDIM_CONSUMER_COMPILED) != defined(NONDIM_SEPARATE_COMPILATION)
+#error "nondim::compiled must define NONDIM_SEPARATE_COMPILATION for its users, and nondim::nondim must not"
+#endif
+#if defined(NONDIM_CONSUMER_NO_EIGEN) && __has_include(<Eigen/Core>)
+#error "nondim::compiled must not give its users Eigen's include directory (only its one source needs it)"
+#endif
+
 #include <nondim/analysis.hpp>
 #include <nondim/parse.hpp>
 #include <nondim/quantity.hpp>
@@ -8,6 +17,10 @@
 #include <cmath>
 #include <cstdio>
 #include <vector>
+
+#if defined(NONDIM_CONSUMER_SECOND_UNIT)
+std::size_t second_unit_group_count();  // second_unit.cpp
+#endif
 
 int main() {
   using namespace nondim;
@@ -62,5 +75,10 @@ int main() {
   const double q_star = scales(rho, U, D).nondimensional(q);
   const bool scaled = std::fabs(q_star - 0.5) < 1e-15;
   std::printf("pi_groups %s analyze(); q* = %.3f\n", agree ? "agrees with" : "DISAGREES with", q_star);
-  return (psi > 0.0087 && psi < 0.0088 && parsed && grouped && agree && scaled) ? 0 : 1;
+#if defined(NONDIM_CONSUMER_SECOND_UNIT)
+  const bool second = second_unit_group_count() == 1;
+#else
+  const bool second = true;
+#endif
+  return (psi > 0.0087 && psi < 0.0088 && parsed && grouped && agree && scaled && second) ? 0 : 1;
 }

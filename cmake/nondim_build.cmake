@@ -1,0 +1,66 @@
+# Helpers for nondim's own build (not installed).
+
+# nondim_uses_analysis(<out-var> <source>...)
+# TRUE when one of the sources, or a header of its own folder that it includes with quotes
+# (followed transitively), includes a header of the analysis half: anything under
+# <nondim/analysis/...>, or the entry headers <nondim/analysis.hpp>, <nondim/similarity.hpp>,
+# <nondim/report.hpp>, <nondim/nondim.hpp>, <nondim/implementation.ipp>. Such a source needs
+# nondim::compiled or nondim::nondim; any other needs nondim::quantity alone.
+function(nondim_uses_analysis out)
+  set(pending "")
+  foreach(source IN LISTS ARGN)
+    get_filename_component(source "${source}" ABSOLUTE BASE_DIR "${CMAKE_CURRENT_SOURCE_DIR}")
+    list(APPEND pending "${source}")
+  endforeach()
+  set(seen "")
+  set(result FALSE)
+  while(pending AND NOT result)
+    list(POP_FRONT pending file)
+    if(file IN_LIST seen OR NOT EXISTS "${file}")
+      continue()
+    endif()
+    list(APPEND seen "${file}")
+    get_filename_component(dir "${file}" DIRECTORY)
+    file(STRINGS "${file}" lines REGEX "^[ \t]*#[ \t]*include")
+    foreach(line IN LISTS lines)
+      if(line MATCHES "<nondim/(analysis/|analysis\\.hpp|similarity\\.hpp|report\\.hpp|nondim\\.hpp|implementation\\.ipp)")
+        set(result TRUE)
+        break()
+      elseif(line MATCHES "\"([^\"]+)\"" AND EXISTS "${dir}/${CMAKE_MATCH_1}")
+        list(APPEND pending "${dir}/${CMAKE_MATCH_1}")
+      endif()
+    endforeach()
+  endwhile()
+  set(${out} ${result} PARENT_SCOPE)
+endfunction()
+
+# nondim_link(<target> <source>...)
+# Links <target> to what its sources include: ${NONDIM_ANALYSIS_TARGET} (nondim::compiled, or
+# nondim::nondim with NONDIM_HEADER_ONLY=ON) when they use the analysis half, else
+# nondim::quantity (standard library only: a solver-half test that slips an analysis header
+# in fails to compile or to link).
+function(nondim_link target)
+  nondim_uses_analysis(analysis ${ARGN})
+  if(analysis)
+    target_link_libraries(${target} PRIVATE ${NONDIM_ANALYSIS_TARGET})
+  else()
+    target_link_libraries(${target} PRIVATE nondim::quantity)
+  endif()
+endfunction()
+
+# nondim_declarations_only(<out-var>)
+# TRUE when <nondim/nondim.hpp> with NONDIM_SEPARATE_COMPILATION defined opens no Eigen and
+# no Boost header (the analysis headers then declare only, and nondim::compiled needs Eigen
+# and Boost for its one source alone). Preprocessing only: a fraction of a second.
+function(nondim_declarations_only out)
+  set(result FALSE)
+  if(CMAKE_CXX_COMPILER_ID MATCHES "GNU|Clang")
+    execute_process(COMMAND ${CMAKE_CXX_COMPILER} -x c++ -std=c++20 -DNONDIM_SEPARATE_COMPILATION
+                            -I ${PROJECT_SOURCE_DIR}/include -E -M ${PROJECT_SOURCE_DIR}/include/nondim/nondim.hpp
+                    RESULT_VARIABLE rc OUTPUT_VARIABLE deps ERROR_QUIET)
+    if(rc EQUAL 0 AND NOT deps MATCHES "(boost/|eigen3|Eigen/)")
+      set(result TRUE)
+    endif()
+  endif()
+  set(${out} ${result} PARENT_SCOPE)
+endfunction()
