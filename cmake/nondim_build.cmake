@@ -40,6 +40,14 @@ endfunction()
 # nondim::quantity (standard library only: a solver-half test that slips an analysis header
 # in fails to compile or to link).
 function(nondim_link target)
+  # a test that computes a reference with Eigen itself links Eigen for that
+  foreach(source IN LISTS ARGN)
+    file(STRINGS "${source}" eigen_lines REGEX "^[ \t]*#[ \t]*include[ \t]*<Eigen/")
+    if(eigen_lines)
+      target_link_libraries(${target} PRIVATE Eigen3::Eigen)
+      break()
+    endif()
+  endforeach()
   nondim_uses_analysis(analysis ${ARGN})
   if(analysis)
     target_link_libraries(${target} PRIVATE ${NONDIM_ANALYSIS_TARGET})
