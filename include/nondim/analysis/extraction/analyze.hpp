@@ -35,7 +35,7 @@ namespace nondim {
 ///         independent (the message names the first that depends on those before it); a
 ///         group's exact exponents do not fit in 64 bits; `exact_arithmetic::int64` was asked
 ///         for and the elimination overflows.
-[[nodiscard]] analysis analyze(const problem& p, const options& o = {});
+analysis analyze(const problem& p, const options& o = {});
 
 }  // namespace nondim
 

@@ -32,8 +32,7 @@ struct null_space_basis {
 /// says).
 /// \throws analysis_error when a basis vector does not fit in int64, or when
 ///         `exact_arithmetic::int64` was asked for and the elimination overflows.
-[[nodiscard]] null_space_basis exact_null_space(const dimension_matrix& a,
-                                                exact_arithmetic arithmetic = exact_arithmetic::automatic);
+null_space_basis exact_null_space(const dimension_matrix& a, exact_arithmetic arithmetic = exact_arithmetic::automatic);
 
 }  // namespace nondim
 

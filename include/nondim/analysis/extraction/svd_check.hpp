@@ -39,8 +39,7 @@ struct svd_check {
 /// one Eigen's rank-revealing decompositions document). Residual of a group v: the
 /// Euclidean norm of A·v divided by that of v, computed in double; exact groups give 0 up
 /// to the rounding of non-dyadic fractional exponents.
-[[nodiscard]] svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_group>& groups,
-                                       std::size_t exact_rank);
+svd_check check_with_svd(const dimension_matrix& a, const std::vector<pi_group>& groups, std::size_t exact_rank);
 
 }  // namespace nondim
 

@@ -38,7 +38,7 @@ namespace nondim {
 /// SVD check: rank 3, agrees; singular values ...; max residual 0
 /// ```
 /// Only the base dimensions that appear get a row. ASCII writes `pi1`, `*`, `^-2`, names as given.
-[[nodiscard]] std::string to_string(const analysis& a, text_form form = text_form::unicode);
+std::string to_string(const analysis& a, text_form form = text_form::unicode);
 
 template <class CharT, class Traits>
 std::basic_ostream<CharT, Traits>& operator<<(std::basic_ostream<CharT, Traits>& os, const analysis& a) {

@@ -23,7 +23,7 @@ namespace nondim {
 /// `{"variables": [{"name", "unit", "dimension"}], "rank", "repeating", "groups": [{"exponents",
 /// "text", "latex", "matches": [{"name", "symbol", "power"}]}], "svd_check": {"rank", "agrees",
 /// "singular_values", "max_residual"}}`, indented, ending in a newline.
-[[nodiscard]] std::string json_report(const analysis& a);
+std::string json_report(const analysis& a);
 
 }  // namespace nondim
 

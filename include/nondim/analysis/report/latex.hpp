@@ -20,18 +20,18 @@ namespace nondim {
 /// \brief `name` in LaTeX math: a head, then trailing digits or the part after the first
 /// `_` as a subscript: `rho` -> `\rho`, `mu_w` -> `\mu_{w}`, `D_h` -> `D_{h}`, `T_inf` ->
 /// `T_{\mathrm{inf}}`, `L1` -> `L_{1}`, `Delta_p` -> `\Delta_{p}`, `eps` -> `\varepsilon`.
-[[nodiscard]] std::string latex_name(std::string_view name);
+std::string latex_name(std::string_view name);
 
 /// \brief A group as a LaTeX fraction: the factors with positive exponents over those with
 /// negative ones, the non-repeating variable first (`\frac{F}{\rho U^{2} D^{2}}`); without
 /// a denominator a plain product, without a numerator `\frac{1}{...}`.
-[[nodiscard]] std::string latex(const pi_group& g);
+std::string latex(const pi_group& g);
 
 /// \brief The analysis as LaTeX: one display equation per group, `\Pi_k = <fraction>`,
 /// followed by `= \mathrm{Re}^{-1}` for each recognised named group, with comment lines
 /// (`%`) for the title, the repeating variables and the excluded variables. Paste into a
 /// document that loads amsmath (for `\text`).
-[[nodiscard]] std::string latex_report(const analysis& a, const report_options& o = {});
+std::string latex_report(const analysis& a, const report_options& o = {});
 
 }  // namespace nondim
 

@@ -20,7 +20,7 @@
 namespace nondim {
 
 /// \brief The analysis as GitHub-flavoured Markdown (Unicode symbols: ρ, U⁻², Π1).
-[[nodiscard]] std::string markdown_report(const analysis& a, const report_options& o = {});
+std::string markdown_report(const analysis& a, const report_options& o = {});
 
 }  // namespace nondim
 

@@ -30,7 +30,7 @@ struct variable_scale {
 };
 
 /// \brief The reference scale of every variable of `a`, in the problem's order.
-[[nodiscard]] std::vector<variable_scale> variable_scales(const analysis& a);
+std::vector<variable_scale> variable_scales(const analysis& a);
 
 /// \brief The scales as text, e.g. (Unicode)
 ///
@@ -41,17 +41,17 @@ struct variable_scale {
 ///   ρ         reference         ρ
 ///   μ         μ* = μ/(ρ·U·D)    ρ·U·D
 /// ```
-[[nodiscard]] std::string scales_text_report(const analysis& a, text_form form = text_form::unicode);
+std::string scales_text_report(const analysis& a, text_form form = text_form::unicode);
 
 /// \brief The scales as a Markdown table.
-[[nodiscard]] std::string scales_markdown_report(const analysis& a);
+std::string scales_markdown_report(const analysis& a);
 
 /// \brief The analysis as `json_report` gives it, with one more member, `"scales"`: per
 /// variable `{"name", "reference", "nondimensional", "scale", "exponents"}` (ASCII texts, the
 /// exponents on the repeating variables, only the non-zero ones); for a variable outside
 /// their span `nondimensional`, `scale` and `exponents` are null and `"lacking"` names a base
 /// dimension they lack. Without `--scales` the program prints `json_report` unchanged.
-[[nodiscard]] std::string json_scales_report(const analysis& a);
+std::string json_scales_report(const analysis& a);
 
 }  // namespace nondim
 

@@ -20,8 +20,7 @@ namespace nondim {
 
 /// \brief The analysis as text; `form` unicode writes ρ, U⁻², Π1 and Θ, ascii writes rho,
 /// U^-2, Pi1 and Theta.
-[[nodiscard]] std::string text_report(const analysis& a, const report_options& o = {},
-                                      text_form form = text_form::unicode);
+std::string text_report(const analysis& a, const report_options& o = {}, text_form form = text_form::unicode);
 
 }  // namespace nondim
 

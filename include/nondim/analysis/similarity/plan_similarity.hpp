@@ -28,7 +28,7 @@ namespace nondim {
 ///   the free choice.
 ///
 /// \throws similarity_error for bad input (see `similarity_error`); never for an outcome.
-[[nodiscard]] similarity_plan plan_similarity(const similarity_problem& p);
+similarity_plan plan_similarity(const similarity_problem& p);
 
 }  // namespace nondim
 

@@ -20,7 +20,7 @@ namespace nondim {
 /// a table of variables (prototype, model, model/prototype, in each variable's unit), a
 /// table of groups (prototype, model, model/prototype, matched), the scale-up rule for the
 /// dependent variable, notes, and the cautions of similarity testing.
-[[nodiscard]] std::string to_text(const similarity_plan& plan);
+std::string to_text(const similarity_plan& plan);
 
 }  // namespace nondim
 
