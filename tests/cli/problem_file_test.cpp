@@ -124,6 +124,12 @@ TEST_SUITE("problem file") {
           "C");
     CHECK(f.variables[0].unit_literal);
     CHECK(f.variables[0].note == "\xc2\xb7 \xd0\x96\xc3\xa9");  // TOML 1.0.0: a line-ending backslash trims
+    // U+2EFF (bytes E2 BB BF, found by the problem-file fuzzer), bare and in a string: the
+    // reader's table of white space has no answer for the block U+2C5E..U+3057
+    CHECK(message_of("\xe2\xbb\xbf").find("nondim: p.toml:1: not valid TOML") == 0);
+    CHECK(parse_problem_text("title = \"\xe2\xbb\xbf \xe2\xb1\x9e\"\n[[variable]]\nname = \"x\"\nunit = \"m\"\n",
+                             "p.toml")
+              .title == "\xe2\xbb\xbf \xe2\xb1\x9e");
     // the reader's stand-ins (private use, plane 15) cannot be in the file itself
     CHECK(message_of("title = \"\xf3\xb0\x80\x81\"\n") ==
           "nondim: p.toml:1: column 10: the private-use character U+F0001 is not supported");
