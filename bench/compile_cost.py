@@ -34,6 +34,9 @@ import sys
 import tempfile
 import time
 
+sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+import header_cost  # noqa: E402  (the callgrind count shared by the bench scripts)
+
 HERE = os.path.dirname(os.path.abspath(__file__))
 ROOT = os.path.dirname(HERE)
 
@@ -262,21 +265,9 @@ def compile_cmd(cxx, src, obj, extra=()):
 
 def count_instructions(cxx, src, obj, work):
     """Instructions executed by the whole compile (every process), from callgrind's totals."""
-    out = tempfile.mkdtemp(prefix="cg.", dir=work)
-    cmd = ["valgrind", "--tool=callgrind", "--trace-children=yes",
-           "--callgrind-out-file=" + os.path.join(out, "cg.%p"), *compile_cmd(cxx, src, obj)]
-    p = subprocess.run(cmd, stdout=subprocess.PIPE, stderr=subprocess.PIPE, text=True)
-    if p.returncode != 0:
-        sys.stderr.write(p.stderr)
+    total = header_cost.instructions(compile_cmd(cxx, src, obj), work)
+    if total is None:
         raise SystemExit(f"compile_cost.py: {cxx} failed under valgrind on {src}")
-    total = 0
-    for name in os.listdir(out):
-        with open(os.path.join(out, name)) as f:
-            for line in f:
-                if line.startswith("totals:"):
-                    total += int(line.split()[1])
-                    break
-    shutil.rmtree(out, ignore_errors=True)
     return total
 
 

@@ -18,12 +18,13 @@ Targets (DESIGN.md, "Compile cost"): <nondim/nondim.hpp> compiled once at most 1
 
 import argparse
 import os
-import resource
 import shutil
 import statistics
-import subprocess
 import sys
 import tempfile
+
+sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+import header_cost  # noqa: E402  (the CPU-time measure shared by the bench scripts)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 ROOT = os.path.dirname(HERE)
@@ -44,10 +45,10 @@ int main() {
 
 
 def cpu_seconds(cmd):
-    before = resource.getrusage(resource.RUSAGE_CHILDREN)
-    subprocess.run(cmd, check=True, stdout=subprocess.DEVNULL)
-    after = resource.getrusage(resource.RUSAGE_CHILDREN)
-    return (after.ru_utime - before.ru_utime) + (after.ru_stime - before.ru_stime)
+    seconds, error = header_cost.cpu_time(cmd)
+    if seconds is None:
+        sys.exit(f"include_cost.py: compile failed: {' '.join(cmd)}\n{error}")
+    return seconds
 
 
 def median_time(cxx, source, flags, runs):
