@@ -18,25 +18,22 @@ namespace nondim {
 
 namespace detail {
 
-/// Singular values of `m` (7 rows), descending, from one instantiation of JacobiSVD: a
-/// matrix of up to `small_columns` columns (every problem a person writes) directly, on the
-/// stack; a wider one through the 7 x 7 triangle R of the QR factorisation of its transpose
-/// (m^T = Q R, so m and R^T have the same singular values), which is what JacobiSVD's own
-/// QR preconditioner does for a wide matrix. One instantiation instead of two: the SVD was
-/// most of the cost of compiling the analysis half.
+/// Singular values of `m` (7 rows), descending. The square triangle R of a Householder QR
+/// (of `m` when it has no more columns than rows, of its transpose otherwise) has the
+/// singular values of `m`; a Jacobi SVD of that small square needs no QR preconditioner of
+/// its own. This is the order of work JacobiSVD's preconditioner would do, with one QR
+/// instantiation (shared with similarity planning) instead of the column-pivoting QR and
+/// complete orthogonal decomposition the preconditioner instantiates for both shapes: the
+/// SVD was most of the cost of compiling the analysis half.
 template <class Matrix>
 void singular_values_into(const Matrix& m, std::vector<double>& out) {
-  constexpr Eigen::Index small_columns = 32;
-  using small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, base_dimension_count, small_columns>;
-  const auto take = [&out](const auto& s) { out.assign(s.data(), s.data() + s.size()); };
-  if (m.cols() <= small_columns) {
-    take(Eigen::JacobiSVD<small>(small(m)).singularValues());
-  } else {
-    const Eigen::HouseholderQR<Eigen::MatrixXd> qr(m.transpose());
-    const Eigen::Index k = m.rows();
-    const small r = qr.matrixQR().topLeftCorner(k, k).template triangularView<Eigen::Upper>();
-    take(Eigen::JacobiSVD<small>(r).singularValues());
-  }
+  using square = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, base_dimension_count, base_dimension_count>;
+  const bool wide = m.cols() > m.rows();
+  const Eigen::HouseholderQR<Eigen::MatrixXd> qr(wide ? Eigen::MatrixXd(m.transpose()) : Eigen::MatrixXd(m));
+  const Eigen::Index k = std::min(m.rows(), m.cols());
+  const square r = qr.matrixQR().topLeftCorner(k, k).template triangularView<Eigen::Upper>();
+  const auto s = Eigen::JacobiSVD<square, Eigen::NoQRPreconditioner>(r).singularValues();
+  out.assign(s.data(), s.data() + s.size());
 }
 
 }  // namespace detail
