@@ -55,20 +55,3 @@ function(nondim_link target)
     target_link_libraries(${target} PRIVATE nondim::quantity)
   endif()
 endfunction()
-
-# nondim_declarations_only(<out-var>)
-# TRUE when <nondim/nondim.hpp> with NONDIM_SEPARATE_COMPILATION defined opens no Eigen and
-# no Boost header (the analysis headers then declare only, and nondim::compiled needs Eigen
-# and Boost for its one source alone). Preprocessing only: a fraction of a second.
-function(nondim_declarations_only out)
-  set(result FALSE)
-  if(CMAKE_CXX_COMPILER_ID MATCHES "GNU|Clang")
-    execute_process(COMMAND ${CMAKE_CXX_COMPILER} -x c++ -std=c++20 -DNONDIM_SEPARATE_COMPILATION
-                            -I ${PROJECT_SOURCE_DIR}/include -E -M ${PROJECT_SOURCE_DIR}/include/nondim/nondim.hpp
-                    RESULT_VARIABLE rc OUTPUT_VARIABLE deps ERROR_QUIET)
-    if(rc EQUAL 0 AND NOT deps MATCHES "(boost/|eigen3|Eigen/)")
-      set(result TRUE)
-    endif()
-  endif()
-  set(${out} ${result} PARENT_SCOPE)
-endfunction()

@@ -18,23 +18,3 @@ foreach(expected IN ITEMS "tests/quantity_test.cpp=FALSE" "tests/parse_unit_test
   endif()
 endforeach()
 message(STATUS "link choice: as expected")
-
-# The test that decides whether nondim::compiled's users need Eigen and Boost, on two
-# made-up include trees: one whose <nondim/nondim.hpp> still opens Eigen and Boost with
-# NONDIM_SEPARATE_COMPILATION defined, one that opens them only without it.
-set(fake ${WORK_DIR}/declarations_only)
-file(REMOVE_RECURSE ${fake})
-file(WRITE ${fake}/inline/include/nondim/nondim.hpp "#include <vector>\n#include <boost/version.hpp>\n")
-file(WRITE ${fake}/split/include/nondim/nondim.hpp
-     "#include <vector>\n#if !defined(NONDIM_SEPARATE_COMPILATION)\n#include <boost/version.hpp>\n#endif\n")
-foreach(expected IN ITEMS "inline=FALSE" "split=TRUE")
-  string(REPLACE "=" ";" pair "${expected}")
-  list(GET pair 0 tree)
-  list(GET pair 1 want)
-  set(PROJECT_SOURCE_DIR ${fake}/${tree})
-  nondim_declarations_only(got)
-  if(NOT got STREQUAL want)
-    message(FATAL_ERROR "include tree '${tree}': declarations only = ${got}, expected ${want}")
-  endif()
-endforeach()
-message(STATUS "declarations-only check: as expected")

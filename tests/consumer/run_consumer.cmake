@@ -6,7 +6,7 @@ cmake_minimum_required(VERSION 3.21)
 #   cmake -DMODE=cmake -DAPP_DIR=... -DCOMMON=... [-DARGS=...] [-DRUN=prog;...] -P run_consumer.cmake
 #       configure the consumer project APP_DIR with COMMON and ARGS, build it, run every
 #       program in RUN (none: configure only)
-#   cmake -DMODE=make -DAPP_DIR=... -DPREFIX=... -DCXX=... [-DEXPECT_DECLARATIONS_ONLY=ON] -P run_consumer.cmake
+#   cmake -DMODE=make -DAPP_DIR=... -DPREFIX=... -DCXX=... -P run_consumer.cmake
 #       plain make of APP_DIR/Makefile with pkg-config pointed at PREFIX, run the programs
 file(REMOVE_RECURSE ${SCRATCH})
 file(MAKE_DIRECTORY ${SCRATCH})
@@ -60,9 +60,6 @@ elseif(MODE STREQUAL "cmake")
 elseif(MODE STREQUAL "make")
   find_program(MAKE_PROGRAM NAMES make gmake REQUIRED)
   set(make ${MAKE_PROGRAM} -f ${APP_DIR}/Makefile -j2 CXX=${CXX} APP=${APP_DIR}/../app)
-  if(EXPECT_DECLARATIONS_ONLY)
-    list(APPEND make SECOND=1)
-  endif()
   # nondim-quantity.pc alone: pkg-config sees the scratch install and nothing else, so the
   # solver half must need no other package (Eigen's eigen3.pc is out of sight)
   run(${CMAKE_COMMAND} -E env PKG_CONFIG_LIBDIR=${PREFIX}/share/pkgconfig ${make} quantity_consumer)
