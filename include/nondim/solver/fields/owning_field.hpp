@@ -36,6 +36,8 @@ class field {
   [[nodiscard]] NONDIM_ALWAYS_INLINE bool empty() const noexcept { return values_.empty(); }
   [[nodiscard]] NONDIM_ALWAYS_INLINE Rep* data() noexcept { return values_.data(); }
   [[nodiscard]] NONDIM_ALWAYS_INLINE const Rep* data() const noexcept { return values_.data(); }
+  /// \brief Distance between consecutive elements, in values of Rep: 1.
+  [[nodiscard]] static constexpr std::size_t stride() noexcept { return 1; }
 
   NONDIM_ALWAYS_INLINE reference operator[](std::size_t i) noexcept { return reference(values_.data() + i); }
   NONDIM_ALWAYS_INLINE const_reference operator[](std::size_t i) const noexcept {
@@ -63,5 +65,16 @@ class field {
  private:
   std::vector<Rep> values_;
 };
+
+namespace detail {
+template <class T>
+struct is_owning_field : std::false_type {};
+template <dimension D, class R>
+struct is_owning_field<field<D, R>> : std::true_type {};
+}  // namespace detail
+
+/// \brief A field view (contiguous or strided) or a `field`, of any dimension.
+template <class T>
+concept any_field = any_field_view<T> || detail::is_owning_field<std::remove_cvref_t<T>>::value;
 
 }  // namespace nondim
