@@ -152,8 +152,9 @@ class strided_field_view {
 
 /// \brief The view of member `m` of every struct in `structs`: `member_view<dims::pressure>(cells, &cell::p)`.
 /// The struct's size must be a whole number of the member's type (no padding of another size).
-template <dimension D, class S, class Rep>
-NONDIM_ALWAYS_INLINE constexpr auto member_view(std::span<S> structs, Rep S::*m) noexcept {
+template <dimension D, class S, class M, class Rep>
+requires std::same_as<std::remove_const_t<S>, M> NONDIM_ALWAYS_INLINE constexpr auto member_view(std::span<S> structs,
+                                                                                                 Rep M::*m) noexcept {
   static_assert(sizeof(S) % sizeof(Rep) == 0,
                 "nondim: member_view needs a struct whose size is a whole number of the member's type");
   using R = std::conditional_t<std::is_const_v<S>, const Rep, Rep>;

@@ -34,10 +34,6 @@ concept field_element = is_field_reference<std::remove_cvref_t<T>>::value;
 template <class T>
 concept element_operand = field_element<T> || any_quantity<T> || scalar<std::remove_cvref_t<T>>;
 
-/// At least one element, and nothing else than quantities and numbers beside it.
-template <class A, class B>
-concept element_operands = (field_element<A> || field_element<B>)&&element_operand<A>&& element_operand<B>;
-
 /// The quantity an element reads as; any other operand as it is.
 template <class T>
 NONDIM_ALWAYS_INLINE constexpr auto element_value(const T& x) noexcept {
@@ -197,32 +193,37 @@ class field_reference {
 };
 
 // ---- arithmetic and comparison: the element's quantity takes part ----------------------------
-// Each forwards to the quantity operators, so a mismatch ends in their `nondim:` sentence.
+// Each forwards to the operators of quantities (and of units and states), so a mismatch ends in
+// their `nondim:` sentence.
 
 template <class A, class B>
-requires detail::element_operands<A, B> NONDIM_ALWAYS_INLINE constexpr auto operator+(const A& a, const B& b) noexcept {
+requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator+(
+    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) + detail::element_value(b)) {
   return detail::element_value(a) + detail::element_value(b);
 }
 template <class A, class B>
-requires detail::element_operands<A, B> NONDIM_ALWAYS_INLINE constexpr auto operator-(const A& a, const B& b) noexcept {
+requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator-(
+    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) - detail::element_value(b)) {
   return detail::element_value(a) - detail::element_value(b);
 }
 template <class A, class B>
-requires detail::element_operands<A, B> NONDIM_ALWAYS_INLINE constexpr auto operator*(const A& a, const B& b) noexcept {
+requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator*(
+    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) * detail::element_value(b)) {
   return detail::element_value(a) * detail::element_value(b);
 }
 template <class A, class B>
-requires detail::element_operands<A, B> NONDIM_ALWAYS_INLINE constexpr auto operator/(const A& a, const B& b) noexcept {
+requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator/(
+    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) / detail::element_value(b)) {
   return detail::element_value(a) / detail::element_value(b);
 }
 template <class A, class B>
-requires detail::element_operands<A, B> NONDIM_ALWAYS_INLINE constexpr bool operator==(const A& a,
-                                                                                       const B& b) noexcept {
+requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator==(
+    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) == detail::element_value(b)) {
   return detail::element_value(a) == detail::element_value(b);
 }
 template <class A, class B>
-requires detail::element_operands<A, B> NONDIM_ALWAYS_INLINE constexpr auto operator<=>(const A& a,
-                                                                                        const B& b) noexcept {
+requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator<=>(
+    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) <=> detail::element_value(b)) {
   return detail::element_value(a) <=> detail::element_value(b);
 }
 
