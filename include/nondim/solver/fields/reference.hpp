@@ -34,6 +34,10 @@ concept field_element = is_field_reference<std::remove_cvref_t<T>>::value;
 template <class T>
 concept element_operand = field_element<T> || any_quantity<T> || scalar<std::remove_cvref_t<T>>;
 
+/// At least one of the operands is an element.
+template <class A, class B>
+concept element_pair = field_element<A> || field_element<B>;
+
 /// The quantity an element reads as; any other operand as it is.
 template <class T>
 NONDIM_ALWAYS_INLINE constexpr auto element_value(const T& x) noexcept {
@@ -194,36 +198,49 @@ class field_reference {
 
 // ---- arithmetic and comparison: the element's quantity takes part ----------------------------
 // Each forwards to the operators of quantities (and of units and states), so a mismatch ends in
-// their `nondim:` sentence.
+// their `nondim:` sentence. The element test comes first in each constraint: it keeps these
+// templates out of every other comparison in the namespace (`dimension == dimension`).
 
 template <class A, class B>
-requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator+(
-    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) + detail::element_value(b)) {
+requires detail::element_pair<A, B> && requires(const A& a, const B& b) {
+  detail::element_value(a) + detail::element_value(b);
+}
+NONDIM_ALWAYS_INLINE constexpr auto operator+(const A& a, const B& b) noexcept {
   return detail::element_value(a) + detail::element_value(b);
 }
 template <class A, class B>
-requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator-(
-    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) - detail::element_value(b)) {
+requires detail::element_pair<A, B> && requires(const A& a, const B& b) {
+  detail::element_value(a) - detail::element_value(b);
+}
+NONDIM_ALWAYS_INLINE constexpr auto operator-(const A& a, const B& b) noexcept {
   return detail::element_value(a) - detail::element_value(b);
 }
 template <class A, class B>
-requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator*(
-    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) * detail::element_value(b)) {
+requires detail::element_pair<A, B> && requires(const A& a, const B& b) {
+  detail::element_value(a) * detail::element_value(b);
+}
+NONDIM_ALWAYS_INLINE constexpr auto operator*(const A& a, const B& b) noexcept {
   return detail::element_value(a) * detail::element_value(b);
 }
 template <class A, class B>
-requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator/(
-    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) / detail::element_value(b)) {
+requires detail::element_pair<A, B> && requires(const A& a, const B& b) {
+  detail::element_value(a) / detail::element_value(b);
+}
+NONDIM_ALWAYS_INLINE constexpr auto operator/(const A& a, const B& b) noexcept {
   return detail::element_value(a) / detail::element_value(b);
 }
 template <class A, class B>
-requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator==(
-    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) == detail::element_value(b)) {
+requires detail::element_pair<A, B> && requires(const A& a, const B& b) {
+  detail::element_value(a) == detail::element_value(b);
+}
+NONDIM_ALWAYS_INLINE constexpr auto operator==(const A& a, const B& b) noexcept {
   return detail::element_value(a) == detail::element_value(b);
 }
 template <class A, class B>
-requires(detail::field_element<A> || detail::field_element<B>) NONDIM_ALWAYS_INLINE constexpr auto operator<=>(
-    const A& a, const B& b) noexcept -> decltype(detail::element_value(a) <=> detail::element_value(b)) {
+requires detail::element_pair<A, B> && requires(const A& a, const B& b) {
+  detail::element_value(a) <=> detail::element_value(b);
+}
+NONDIM_ALWAYS_INLINE constexpr auto operator<=>(const A& a, const B& b) noexcept {
   return detail::element_value(a) <=> detail::element_value(b);
 }
 
