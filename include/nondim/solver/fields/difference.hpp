@@ -30,7 +30,7 @@ concept indexed_field = requires(const V& v, std::size_t i) {
 };
 
 template <class X>
-constexpr void check_spacing() {
+consteval void check_spacing() {
   static_assert(holds < any_quantity<X> || indexed_field<X>, X >,
                 "nondim: a grid spacing is a quantity (`dx = 0.01 * units::m`) or a field of coordinates, not a "
                 "raw number");

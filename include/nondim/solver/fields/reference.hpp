@@ -34,6 +34,14 @@ concept field_element = is_field_reference<std::remove_cvref_t<T>>::value;
 template <class T>
 concept element_operand = field_element<T> || any_quantity<T> || scalar<std::remove_cvref_t<T>>;
 
+/// Refuses a write through a read-only view (consteval: no code, even at -O0).
+template <dimension D, class Rep>
+consteval void check_writable() noexcept {
+  static_assert(holds<!std::is_const_v<Rep>, spell<D>, Rep>,
+                "nondim: cannot write through a read-only field view (Rep = const double); make the view "
+                "over mutable storage");
+}
+
 /// At least one of the operands is an element.
 template <class A, class B>
 concept element_pair = field_element<A> || field_element<B>;
@@ -153,25 +161,25 @@ class field_reference {
   /// \brief `v[i] += q`, `-=`, `*= x`, `/= x`: the quantity's own rules (and diagnostics) apply.
   template <detail::element_operand Q>
   NONDIM_ALWAYS_INLINE constexpr const field_reference& operator+=(const Q& q) const noexcept {
-    check_writable();
+    detail::check_writable<D, Rep>();
     if constexpr (writable) *p_ = (get() += detail::element_value(q)).si();
     return *this;
   }
   template <detail::element_operand Q>
   NONDIM_ALWAYS_INLINE constexpr const field_reference& operator-=(const Q& q) const noexcept {
-    check_writable();
+    detail::check_writable<D, Rep>();
     if constexpr (writable) *p_ = (get() -= detail::element_value(q)).si();
     return *this;
   }
   template <detail::element_operand Q>
   NONDIM_ALWAYS_INLINE constexpr const field_reference& operator*=(const Q& q) const noexcept {
-    check_writable();
+    detail::check_writable<D, Rep>();
     if constexpr (writable) *p_ = (get() *= detail::element_value(q)).si();
     return *this;
   }
   template <detail::element_operand Q>
   NONDIM_ALWAYS_INLINE constexpr const field_reference& operator/=(const Q& q) const noexcept {
-    check_writable();
+    detail::check_writable<D, Rep>();
     if constexpr (writable) *p_ = (get() /= detail::element_value(q)).si();
     return *this;
   }
@@ -187,12 +195,6 @@ class field_reference {
   }
 
  private:
-  static constexpr void check_writable() noexcept {
-    static_assert(detail::holds<writable, detail::spell<D>, Rep>,
-                  "nondim: cannot write through a read-only field view (Rep = const double); make the view "
-                  "over mutable storage");
-  }
-
   Rep* p_;
 };
 
@@ -242,6 +244,95 @@ requires detail::element_pair<A, B> && requires(const A& a, const B& b) {
 }
 NONDIM_ALWAYS_INLINE constexpr auto operator<=>(const A& a, const B& b) noexcept {
   return detail::element_value(a) <=> detail::element_value(b);
+}
+
+// ---- direct forms of the common cases -------------------------------------------------------
+// The same results as above, computed on the stored values in one step: a debug build (-O0)
+// pays for every inlined layer, and these have the fewest. Mismatched sums do not match them
+// and take the forwarding forms above, with their diagnostics.
+
+namespace detail {
+template <class R1, class R2>
+concept same_rep = std::same_as<std::remove_const_t<R1>, std::remove_const_t<R2>>;
+}  // namespace detail
+
+template <dimension D1, class R1, dimension D2, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, std::remove_const_t<R1>> operator*(
+    const field_reference<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
+  return quantity<D1 * D2, std::remove_const_t<R1>>::from_si(a.si() * b.si());
+}
+template <dimension D1, class R1, dimension D2, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, std::remove_const_t<R1>> operator/(
+    const field_reference<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
+  return quantity<D1 / D2, std::remove_const_t<R1>>::from_si(a.si() / b.si());
+}
+template <dimension D1, class R1, dimension D2, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, R2> operator*(
+    const field_reference<D1, R1>& a, const quantity<D2, R2>& b) noexcept {
+  return quantity<D1 * D2, R2>::from_si(a.si() * b.si());
+}
+template <dimension D1, class R1, dimension D2, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, R2> operator/(
+    const field_reference<D1, R1>& a, const quantity<D2, R2>& b) noexcept {
+  return quantity<D1 / D2, R2>::from_si(a.si() / b.si());
+}
+template <dimension D1, class R1, dimension D2, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, R1> operator*(
+    const quantity<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
+  return quantity<D1 * D2, R1>::from_si(a.si() * b.si());
+}
+template <dimension D1, class R1, dimension D2, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, R1> operator/(
+    const quantity<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
+  return quantity<D1 / D2, R1>::from_si(a.si() / b.si());
+}
+template <dimension D, class R, scalar T>
+NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator*(T x,
+                                                                             const field_reference<D, R>& a) noexcept {
+  using V = std::remove_const_t<R>;
+  return quantity<D, V>::from_si(static_cast<V>(x) * a.si());
+}
+template <dimension D, class R, scalar T>
+NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator*(const field_reference<D, R>& a,
+                                                                             T x) noexcept {
+  using V = std::remove_const_t<R>;
+  return quantity<D, V>::from_si(a.si() * static_cast<V>(x));
+}
+template <dimension D, class R, scalar T>
+NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator/(const field_reference<D, R>& a,
+                                                                             T x) noexcept {
+  using V = std::remove_const_t<R>;
+  return quantity<D, V>::from_si(a.si() / static_cast<V>(x));
+}
+template <dimension D, class R1, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R1>> operator+(
+    const field_reference<D, R1>& a, const field_reference<D, R2>& b) noexcept {
+  return quantity<D, std::remove_const_t<R1>>::from_si(a.si() + b.si());
+}
+template <dimension D, class R1, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R1>> operator-(
+    const field_reference<D, R1>& a, const field_reference<D, R2>& b) noexcept {
+  return quantity<D, std::remove_const_t<R1>>::from_si(a.si() - b.si());
+}
+template <dimension D, class R1, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R2> operator+(
+    const field_reference<D, R1>& a, const quantity<D, R2>& b) noexcept {
+  return quantity<D, R2>::from_si(a.si() + b.si());
+}
+template <dimension D, class R1, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R2> operator-(
+    const field_reference<D, R1>& a, const quantity<D, R2>& b) noexcept {
+  return quantity<D, R2>::from_si(a.si() - b.si());
+}
+template <dimension D, class R1, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R1> operator+(
+    const quantity<D, R1>& a, const field_reference<D, R2>& b) noexcept {
+  return quantity<D, R1>::from_si(a.si() + b.si());
+}
+template <dimension D, class R1, class R2>
+requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R1> operator-(
+    const quantity<D, R1>& a, const field_reference<D, R2>& b) noexcept {
+  return quantity<D, R1>::from_si(a.si() - b.si());
 }
 
 }  // namespace nondim

@@ -170,7 +170,7 @@ template <std::size_t KA, std::size_t KB>
 struct component_counts {};
 
 template <class A, class B>
-constexpr void check_counts() {
+consteval void check_counts() {
   static_assert(holds<A::size == B::size, component_counts<A::size, B::size>>,
                 "nondim: cannot combine state vectors with different numbers of components (counts shown, left "
                 "first)");
@@ -181,7 +181,7 @@ constexpr void check_counts() {
 // spellings inside a member of a class template.)
 #define NONDIM_STATE_CHECK(NAME, MESSAGE)                                                                     \
   template <class A, class B>                                                                                 \
-  constexpr void NAME() {                                                                                     \
+  consteval void NAME() {                                                                                     \
     check_counts<A, B>();                                                                                     \
     constexpr bool same_size = A::size == B::size;                                                            \
     constexpr std::size_t at = same_size ? first_mismatch<A, B>() : A::size;                                  \
@@ -203,8 +203,15 @@ NONDIM_STATE_CHECK(check_addable,
                    "dimension (left's component first, right's second)")
 #undef NONDIM_STATE_CHECK
 
+template <class Set, class Rep>
+consteval void check_state_writable() noexcept {
+  static_assert(holds<!std::is_const_v<Rep>, Set, Rep>,
+                "nondim: cannot write through a read-only state view (Rep = const double); make the view "
+                "over mutable storage");
+}
+
 template <class Set, class Tag>
-constexpr void check_component() {
+consteval void check_component() {
   static_assert(holds<(Set::template index_of<Tag> < Set::size), not_a_component_of<Tag, Set>>,
                 "nondim: this state has no component of the tag shown (first), see its set (second)");
 }
@@ -347,21 +354,21 @@ class state_ref {
   /// \brief Stores a state of the same dimensions, component by component.
   template <detail::state_like S>
   NONDIM_ALWAYS_INLINE constexpr const state_ref& operator=(const S& o) const noexcept {
-    check_writable();
+    detail::check_state_writable<Set, Rep>();
     detail::check_assignable<Set, detail::set_of<S>>();
     if constexpr (writable && Set::size == detail::set_of<S>::size)
       for (std::size_t k = 0; k < size; ++k) *at(k) = static_cast<value_rep>(o.si(k));
     return *this;
   }
   NONDIM_ALWAYS_INLINE constexpr const state_ref& operator=(const state_ref& o) const noexcept {
-    check_writable();
+    detail::check_state_writable<Set, Rep>();
     if constexpr (writable)
       for (std::size_t k = 0; k < size; ++k) *at(k) = o.si(k);
     return *this;
   }
   template <detail::state_like S>
   NONDIM_ALWAYS_INLINE constexpr const state_ref& operator+=(const S& o) const noexcept {
-    check_writable();
+    detail::check_state_writable<Set, Rep>();
     detail::check_addable<Set, detail::set_of<S>>();
     if constexpr (writable && Set::size == detail::set_of<S>::size)
       for (std::size_t k = 0; k < size; ++k) *at(k) += o.si(k);
@@ -369,7 +376,7 @@ class state_ref {
   }
   template <detail::state_like S>
   NONDIM_ALWAYS_INLINE constexpr const state_ref& operator-=(const S& o) const noexcept {
-    check_writable();
+    detail::check_state_writable<Set, Rep>();
     detail::check_addable<Set, detail::set_of<S>>();
     if constexpr (writable && Set::size == detail::set_of<S>::size)
       for (std::size_t k = 0; k < size; ++k) *at(k) -= o.si(k);
@@ -383,11 +390,6 @@ class state_ref {
     } else {
       return p_ + k;
     }
-  }
-  static constexpr void check_writable() noexcept {
-    static_assert(detail::holds<writable, Set, Rep>,
-                  "nondim: cannot write through a read-only state view (Rep = const double); make the view "
-                  "over mutable storage");
   }
 
   Rep* p_;
