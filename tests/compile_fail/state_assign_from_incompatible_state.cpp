@@ -2,7 +2,7 @@
 // mass (kg), not a mass per length (kg/m), until divided by dx.
 // expect: nondim: cannot assign a state from one whose component at the position shown has another dimension
 // expect: component_at<1, ?mass, nondim::spelled::dim<nondim::spelled::L<-1>, nondim::spelled::M<1> ?> ?>
-// expect: component_at<1, nondim::scaled_component<mass_flux, 
+// expect: component_at<1, nondim::scaled_component<mass_flux,
 // expect: nondim::spelled::dim<nondim::spelled::M<1> ?> ?> ?>
 #include <nondim/field.hpp>
 #include <nondim/quantity.hpp>
