@@ -7,7 +7,7 @@
 ///
 /// \code
 ///   std::vector<double> p_si(n);                                  // the solver's storage, Pa
-///   nondim::field_view<dims::pressure> p(std::span<double>(p_si));
+///   nondim::field_view<dims::pressure> p{std::span<double>(p_si)};
 ///   p[0] = 101.325 * units::kPa;                                  // p[0] = 2.0 * units::m; does not compile
 ///   quantity<dims::pressure> p0 = p[0];
 ///

@@ -5,7 +5,7 @@
 /// `v[i]` and `*it` of the field views return.
 ///
 /// A proxy, as `std::vector<bool>::reference` is: `auto x = v[i]` keeps a reference to the
-/// element; write `quantity x = v[i]` (or `v[i].get()`) for a copy of the value.
+/// element; write `quantity<D> x = v[i]` (or `v[i].get()`) for a copy of the value.
 
 #include <compare>
 #include <concepts>
