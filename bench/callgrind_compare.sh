@@ -1,17 +1,21 @@
 #!/usr/bin/env bash
-# Instruction counts (callgrind Ir, deterministic) of the wall heat-transfer kernel written on
-# nondim quantities and on raw double, at -O2 (and -O0 with --opt), with each compiler found.
+# Instruction counts (callgrind Ir, deterministic) of a solver kernel written on nondim types and
+# on raw double, at -O2 (and -O0 with --opt), with each compiler found.
 #
-#   bench/callgrind_compare.sh [--cells N] [--compilers "g++ clang++"] [--opt "-O2 -O0"] [--include DIR]
-#                              [--work DIR] [--strict]
+#   bench/callgrind_compare.sh [--kernel heat|flux] [--cells N] [--compilers "g++ clang++"] [--opt "-O2 -O0"]
+#                              [--include DIR] [--work DIR] [--strict]
 #
-# For every compiler and both forms of the kernel (one expression for Nu; the power terms
-# named), it compiles bench/callgrind_driver.cpp once per kernel (each binary holds one kernel),
+# --kernel heat (default): the wall heat-transfer kernel of heat_kernel.hpp on quantities, in two
+# forms (one expression for Nu; the power terms named), driver callgrind_driver.cpp.
+# --kernel flux: the flux of quasi-1D flow of flux_kernel.hpp on typed fields, in two forms
+# (`views`: a field_view per component over double[3][n]; `state`: state_views over double[n][3]),
+# driver flux_callgrind_driver.cpp.
+# For every compiler and form it compiles the driver once per kernel (each binary holds one kernel),
 # runs it under `valgrind --tool=callgrind --toggle-collect=<kernel>` so only the kernel and
 # what it calls are counted, and prints per cell:
 #   incl  Ir of the kernel and its callees (libm pow included): the cost a solver pays
 #   self  Ir of the kernel's own instructions
-# and the ratio quantity/double, for each optimisation level of --opt (default -O2; "-O2 -O0"
+# and the ratio typed/double, for each optimisation level of --opt (default -O2; "-O2 -O0"
 # adds the debug-build figures). The target is a ratio of 1 (equal counts) at -O2 and at most 2
 # at -O0 (DESIGN.md, "Performance targets"); --strict checks only the -O2 one. The checksums
 # say whether both kernels produced bit-identical outputs. --strict: exit 1 if any inclusive
@@ -27,6 +31,7 @@ work=""
 strict=0
 include="$root/include"
 opts="-O2"
+kernel_set=heat
 while [[ $# -gt 0 ]]; do
   case "$1" in
     --cells) cells=$2; shift 2 ;;
@@ -35,7 +40,8 @@ while [[ $# -gt 0 ]]; do
     --include) include=$(realpath "$2"); shift 2 ;;
     --opt) opts=$2; shift 2 ;;
     --strict) strict=1; shift ;;
-    -h|--help) sed -n '2,19p' "$0"; exit 0 ;;
+    --kernel) kernel_set=$2; shift 2 ;;
+    -h|--help) sed -n '2,24p' "$0"; exit 0 ;;
     *) echo "callgrind_compare.sh: unknown argument '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
@@ -55,9 +61,26 @@ mkdir -p "$work"
 flags=(-std=c++20 -Wall -Wextra -Wpedantic -Wshadow -Wconversion -Wsign-conversion -Werror
        -I"$include" -I"$here")
 
-# name of the kernel function -> 1 if it is the quantity form
+# name of the kernel function -> 1 if it is the typed form
 declare -A is_quantity=([heat_kernel_quantity]=1 [heat_kernel_double]=0
-                        [heat_kernel_quantity_named]=1 [heat_kernel_double_named]=0)
+                        [heat_kernel_quantity_named]=1 [heat_kernel_double_named]=0
+                        [flux_kernel_typed_views]=1 [flux_kernel_double_views]=0
+                        [flux_kernel_typed_state]=1 [flux_kernel_double_state]=0)
+case "$kernel_set" in
+  heat) forms="expression named"; driver="$here/callgrind_driver.cpp" ;;
+  flux) forms="views state"; driver="$here/flux_callgrind_driver.cpp" ;;
+  *) echo "callgrind_compare.sh: --kernel is heat or flux, not '$kernel_set'" >&2; exit 2 ;;
+esac
+# kernel_name FORM TYPED(quantity|double): the function measured
+kernel_name() {
+  if [[ $kernel_set == heat ]]; then
+    local suffix=""; [[ $1 == named ]] && suffix="_named"
+    echo "heat_kernel_$2$suffix"
+  else
+    local rep=typed; [[ $2 == double ]] && rep=double
+    echo "flux_kernel_${rep}_$1"
+  fi
+}
 
 # run KERNEL BINARY: prints "incl self checksum"
 measure() {
@@ -75,7 +98,7 @@ measure() {
 }
 
 status=0
-printf '%s cells, callgrind Ir per cell (kernel only)\n' "$cells"
+printf '%s kernel, %s cells, callgrind Ir per cell (kernel only; qty = the typed form)\n' "$kernel_set" "$cells"
 printf '%-8s %-4s %-10s %10s %12s %8s %10s %10s %8s  %s\n' compiler opt form "incl(qty)" "incl(dbl)" ratio \
   "self(qty)" "self(dbl)" ratio outputs
 found=0
@@ -86,14 +109,13 @@ for cxx in $compilers; do
   fi
   found=1
   for opt in $opts; do
-    for form in expression named; do
-      suffix=""; [[ $form == named ]] && suffix="_named"
+    for form in $forms; do
       declare -A res=()
       for rep in quantity double; do
-        kernel="heat_kernel_${rep}${suffix}"
+        kernel=$(kernel_name "$form" "$rep")
         bin="$work/${cxx//+/x}${opt}_${kernel}"
         "$cxx" "${flags[@]}" "$opt" -DNONDIM_BENCH_KERNEL="$kernel" \
-          -DNONDIM_BENCH_QUANTITY="${is_quantity[$kernel]}" "$here/callgrind_driver.cpp" -o "$bin"
+          -DNONDIM_BENCH_QUANTITY="${is_quantity[$kernel]}" "$driver" -o "$bin"
         res[$rep]=$(measure "$kernel" "$bin")
       done
       read -r qi qs qsum <<<"${res[quantity]}"

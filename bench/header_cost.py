@@ -1,19 +1,20 @@
 #!/usr/bin/python3
 """Cost of including each solver-half header alone.
 
-For every entry header of the solver half (`quantity.hpp`, `parse.hpp`, `solver.hpp`) and every
+For every entry header of the solver half (`quantity.hpp`, `field.hpp`, `parse.hpp`, `solver.hpp`) and every
 header under include/nondim/solver/, writes a translation unit holding only
 `#include <nondim/...>`, compiles it with `-std=c++20 -O2 -c` with every compiler found, and
 prints the median CPU time (user + system of the compiler, which preemption on a shared
 machine does not inflate) of --runs compiles. `<cmath>` and `<string>` alone are measured as
-references. Target (DESIGN.md, "Architecture"): every solver-half header well under 1 s.
+references. Target (DESIGN.md, "Architecture"): every solver-half header well under 1 s;
+`<nondim/field.hpp>` under 0.5 s.
 With --instructions, also the instructions the compiler executes (valgrind --tool=callgrind,
 children traced; deterministic, ~20 s per header and compiler).
 
   bench/header_cost.py [--runs 5] [--compilers g++,clang++] [--instructions] [--markdown] [--include DIR]
 
 Installs nothing; uses only the compilers found on PATH. Exit status 1 if a header does not
-compile alone or takes 1 s or more.
+compile alone or takes 1 s or more (field.hpp: 0.5 s).
 """
 
 import argparse
@@ -29,10 +30,12 @@ HERE = os.path.dirname(os.path.abspath(__file__))
 ROOT = os.path.dirname(HERE)
 INCLUDE = os.path.join(ROOT, "include")
 LIMIT_S = 1.0
+# Tighter targets of single headers (issue 15: the typed fields go into every kernel's file).
+LIMITS_S = {"<nondim/field.hpp>": 0.5}
 
 
 def headers():
-    entry = ["nondim/quantity.hpp", "nondim/parse.hpp", "nondim/solver.hpp"]
+    entry = ["nondim/quantity.hpp", "nondim/field.hpp", "nondim/parse.hpp", "nondim/solver.hpp"]
     inner = []
     for dirpath, _, files in os.walk(os.path.join(INCLUDE, "nondim", "solver")):
         for f in files:
@@ -103,7 +106,8 @@ def main():
                     break
                 times.append(t)
             med = statistics.median(times) if times else float("nan")
-            if h.startswith("<nondim/") and not med < LIMIT_S:
+            if h.startswith("<nondim/") and not med < LIMITS_S.get(h, LIMIT_S):
+                sys.stderr.write(f"header_cost.py: {h} with {cxx}: {med:.3f} s, target < {LIMITS_S.get(h, LIMIT_S)} s\n")
                 status = 1
             row.append(f"{med:.3f} s")
             if a.instructions:

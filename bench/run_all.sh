@@ -9,7 +9,7 @@
 #   --jobs         parallel compile jobs (default 1: the machine is shared)
 #   --min-time     --benchmark_min_time per benchmark, seconds (default 0.1)
 #   --repetitions  --benchmark_repetitions, medians are taken over them (default 5)
-#   --cells        cells for callgrind_compare.sh (default 100000)
+#   --cells        cells for callgrind_compare.sh, heat and flux kernels (default 100000)
 #   --runs         compiles per translation unit in compile_cost.py and header_cost.py (default 5)
 #
 # Needs: cmake, a C++20 compiler (g++ 12 / clang++ 14), Google Benchmark (Debian libbenchmark-dev),
@@ -98,6 +98,8 @@ done
 step "instruction counts (callgrind), -O2 and -O0"
 "$here/callgrind_compare.sh" --cells "$cells" --opt "-O2 -O0" 2>&1 | tee "$logs/callgrind.log"
 while IFS= read -r line; do summaries+=("callgrind: $line"); done < <(grep -E '^(g\+\+|clang\+\+) ' "$logs/callgrind.log" || true)
+"$here/callgrind_compare.sh" --kernel flux --cells "$cells" --opt "-O2 -O0" 2>&1 | tee "$logs/callgrind_flux.log"
+while IFS= read -r line; do summaries+=("callgrind flux: $line"); done < <(grep -E '^(g\+\+|clang\+\+) ' "$logs/callgrind_flux.log" || true)
 
 step "compile cost"
 /usr/bin/python3 "$here/compile_cost.py" --runs "$runs" 2>&1 | tee "$logs/compile_cost.log"

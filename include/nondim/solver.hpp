@@ -5,6 +5,7 @@
 /// reference scales a solver evaluates in its loops (`pi_groups`, `pi_product`, `scales`),
 /// their exponents fixed by the compiler. Cheap enough for every translation unit of a solver.
 
+#include "field.hpp"
 #include "parse.hpp"
 #include "quantity.hpp"
 #include "solver/groups/pi_groups.hpp"

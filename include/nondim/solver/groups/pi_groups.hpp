@@ -55,11 +55,6 @@ struct compile_time_basis {
 
 namespace detail {
 
-/// \brief Always `Ok`; its other arguments carry the dimensions or arguments into the
-/// diagnostic when a `static_assert` on it fails.
-template <bool Ok, class... Spelled>
-inline constexpr bool holds = Ok;
-
 /// Names a bad argument in compile errors: its 1-based position and its type.
 template <std::size_t Position, class T>
 struct not_a_quantity {};

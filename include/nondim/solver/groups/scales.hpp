@@ -26,6 +26,9 @@
 /// `dimensional<D>(x)` is `x * scale`: the round trip is exact when the scale is a power of
 /// two, and otherwise within one unit in the last place.
 ///
+/// Whole fields: `s.nondimensional(v, out)` and `s.dimensional(in, v)` convert a field view
+/// (or a `field`) into and out of a span of numbers, the scale computed once per call.
+///
 /// Temperatures: a nondimensional temperature is built from differences,
 /// theta = (T - T_ref) / dT, by `nondimensional_difference(T, T_ref)`; an absolute
 /// `temperature_point` passed to `nondimensional` does not compile.
@@ -33,10 +36,13 @@
 #include <array>
 #include <cstddef>
 #include <cstdint>
+#include <span>
 #include <tuple>
 #include <type_traits>
 #include <utility>
 
+#include "../fields/errors.hpp"
+#include "../fields/owning_field.hpp"
 #include "../units/math.hpp"
 #include "../units/quantity_type.hpp"
 #include "../units/spelling.hpp"
@@ -269,6 +275,53 @@ class reference_scales {
   template <dimension D>
   [[nodiscard]] constexpr quantity<D> dimensional(double x) const noexcept {
     return quantity<D>::from_si(x * scale_si<D>(std::make_index_sequence<size>{}));
+  }
+
+  /// \brief A whole field divided by the reference scale of its dimension:
+  /// out[i] = v[i] / scale, the scale computed once for the call.
+  /// \param v   a `field_view`, `strided_field_view` or `field` of dimension D
+  /// \param out as many numbers as v has elements
+  /// \throws field_size_error when the sizes differ (nothing is written then)
+  template <any_field F>
+  void nondimensional(const F& v, std::span<double> out) const {
+    constexpr dimension D = std::remove_cvref_t<F>::dim;
+    if (out.size() != v.size())
+      throw field_size_error(
+          "reference_scales::nondimensional(field, out): the output span must hold one value per "
+          "element of the field",
+          v.size(), out.size());
+    const double k = scale_si<D>(std::make_index_sequence<size>{});
+    const auto* first = v.data();
+    const std::size_t stride = v.stride();
+    double* o = out.data();
+    for (std::size_t i = 0, n = out.size(); i < n; ++i) o[i] = static_cast<double>(first[i * stride]) / k;
+  }
+
+  /// \brief A whole field from nondimensional numbers: v[i] = in[i] * scale (the inverse of
+  /// `nondimensional(v, out)`), the scale computed once for the call.
+  /// \param in as many numbers as v has elements
+  /// \param v  a writable `field_view`, `strided_field_view` or `field` of dimension D
+  /// \throws field_size_error when the sizes differ (nothing is written then)
+  template <any_field F>
+  void dimensional(std::span<const double> in, F&& v) const {
+    using view = std::remove_cvref_t<F>;
+    constexpr dimension D = view::dim;
+    using rep = std::remove_pointer_t<decltype(v.data())>;
+    static_assert(detail::holds<!std::is_const_v<rep>, detail::spell<D>, rep>,
+                  "nondim: dimensional(in, v) writes into v; a read-only view (Rep = const double) cannot take the "
+                  "values");
+    if constexpr (!std::is_const_v<rep>) {
+      if (in.size() != v.size())
+        throw field_size_error(
+            "reference_scales::dimensional(in, field): the input span must hold one value per "
+            "element of the field",
+            v.size(), in.size());
+      const double k = scale_si<D>(std::make_index_sequence<size>{});
+      rep* first = v.data();
+      const std::size_t stride = v.stride();
+      const double* x = in.data();
+      for (std::size_t i = 0, n = in.size(); i < n; ++i) first[i * stride] = static_cast<rep>(x[i] * k);
+    }
   }
 
   /// \brief The absolute temperature T_ref + theta dT (the inverse of `nondimensional_difference`).

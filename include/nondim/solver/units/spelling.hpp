@@ -91,4 +91,9 @@ using spell = typename spell_from<D>::type;
 template <class... Spelled>
 inline constexpr bool dimensions_involved = false;
 
+/// \brief Always `Ok`; its other arguments carry the dimensions or arguments into the
+/// diagnostic when a `static_assert` on it fails.
+template <bool Ok, class... Spelled>
+inline constexpr bool holds = Ok;
+
 }  // namespace nondim::detail
