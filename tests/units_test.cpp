@@ -1,6 +1,7 @@
 // Tests of nondim/units: every factor checked against its published value.
 // NIST SP 811 (2008) Appendix B.8 prints factors to 7 significant digits (exact ones in
 // bold); the tolerance of each check matches the digits printed.
+#include <nondim/parse.hpp>
 #include <nondim/quantity.hpp>
 
 #include <doctest/doctest.h>
@@ -62,13 +63,48 @@ TEST_SUITE("units") {
     CHECK(close7(units::kcal.factor, 4.1868e3));       // kilocalorie_IT = 4.1868 E+03 (exact)
     CHECK(close7(units::P.factor, 1.0e-1));            // poise = 1.0 E-01 (exact)
     CHECK(close7(units::St.factor, 1.0e-4));           // stokes = 1.0 E-04 (exact)
-    CHECK(close7(units::rpm.factor, 1.047198e-1));     // revolution per minute = 1.047 198 E-01 rad/s
+    // revolution per minute = 1.047 198 E-01 rad/s: the angular velocity of one revolution
+    // (2 pi rad, B.8) per minute; nondim's rpm is the rotational frequency n = omega/(2 pi)
+    // (ISO 80000-3), so the published factor is 2 pi times rpm
+    CHECK(close7(2.0 * detail::pi * units::rpm.factor, 1.047198e-1));
+    CHECK(close7((units::rev / units::min).factor, 1.047198e-1));
     CHECK(close7(units::angstrom.factor, 1.0e-10));    // angstrom = 1.0 E-10 (exact)
     CHECK(close7(units::eV.factor, 1.602176634e-19));  // SI Brochure 9th ed., table 8: electronvolt (exact since 2019)
     CHECK(close7(units::Da.factor, 1.66053906660e-27));  // SI Brochure 9th ed., table 8: dalton
     CHECK(close7(units::deg.factor, 1.745329e-2));       // NIST SP 811 B.8: degree (angle) = 1.745 329 E-02 rad
     CHECK(close7(units::degR.factor, 5.0 / 9.0));        // NIST SP 811 B.9: T/K = (T/degR)/1.8
     CHECK(close7(units::delta_degF.factor, 5.0 / 9.0));  // NIST SP 811 B.9: a Fahrenheit interval is 5/9 K
+  }
+
+  TEST_CASE("exact definitions hold exactly, in the table and in conversions (NIST SP 811 (2008) B.8)") {
+    // B.8: foot = 3.048 E-01 m, pound = 4.535 923 7 E-01 kg, pound-force = lb * g_n (exact);
+    // standard gravity 9.806 65 m/s^2 (SI Brochure 9th ed. / 3rd CGPM 1901)
+    CHECK(units::ft.factor == 0.3048);
+    CHECK(units::lbf.factor == 0.45359237 * 9.80665);
+    // psi = lbf/in^2, gallon (U.S.) = 231 in^3, gpm = gal/min
+    CHECK(units::psi.factor == units::lbf.factor / (0.0254 * 0.0254));
+    CHECK(units::gal.factor == 231.0 * 0.0254 * 0.0254 * 0.0254);
+    CHECK(units::gpm.factor == units::gal.factor / 60.0);
+    // gallon [Canadian and U.K. (Imperial)] = 4.546 09 E-03 m^3 (exact)
+    CHECK(units::gal_imp.factor == 4.54609e-3);
+    // inch of mercury, conventional: 25.4 conventional mmHg; millimeter of mercury,
+    // conventional = 13.5951 g/cm^3 * 1 mm * g_n = 133.322 387 415 Pa (B.8 footnote)
+    CHECK(units::mmHg.factor == 133.322387415);
+    CHECK(units::inHg.factor == 25.4 * units::mmHg.factor);
+    CHECK(convert(1.0, "inHg", "mmHg") == 25.4);
+    CHECK(convert(25.4, "mmHg", "inHg") == 1.0);
+    CHECK(units::inHg.factor == doctest::Approx(3386.388640341).epsilon(1e-15));
+    // conventional water (1000 kg/m^3 under g_n): mmH2O = 9.806 65 E+00 Pa (exact),
+    // inH2O = 25.4 mmH2O, ftH2O = 12 inH2O
+    CHECK(units::mmH2O.factor == 9.80665);
+    CHECK(convert(1.0, "inH2O", "mmH2O") == doctest::Approx(25.4).epsilon(1e-15));
+    CHECK(convert(1.0, "ftH2O", "inH2O") == doctest::Approx(12.0).epsilon(1e-15));
+    // acre = 43 560 ft^2 on the international foot: 4046.856 422 4 m^2 (B.8 prints 4.046 873
+    // E+03 for the retired US survey foot, 1200/3937 m)
+    CHECK(units::acre.factor == doctest::Approx(4046.8564224).epsilon(1e-15));
+    CHECK(convert(1.0, "acre", "ft^2") == doctest::Approx(43560.0).epsilon(1e-15));
+    // SI Brochure 9th ed., table 8: 1 t = 10^3 kg, spelled `t` or `tonne`
+    CHECK(convert(1.0, "tonne", "kg") == 1000.0);
   }
 
   TEST_CASE("compound customary units follow from their parts (NIST SP 811 Appendix B.8)") {
