@@ -162,8 +162,8 @@ TEST_SUITE("problem file") {
     // Unicode general category Cf (format characters, UnicodeData.txt, from memory): a
     // right-to-left mark, a zero-width space, joiners, a byte-order mark, a soft hyphen;
     // and spaces beyond ASCII (Zs). Each shows nothing, so `D` and `D` + mark look alike.
-    for (const char* name : {"D\u200F", "D\u200B", "D\u200C", "D\u200D", "\uFEFFD", "D\u00AD", "D\u2060",
-                             "D\u202E", "D\u2066", "D\u00A0", "D\u3000", "D\u2009"}) {
+    for (const char* name : {"D\u200F", "D\u200B", "D\u200C", "D\u200D", "\uFEFFD", "D\u00AD", "D\u2060", "D\u202E",
+                             "D\u2066", "D\u00A0", "D\u3000", "D\u2009"}) {
       CAPTURE(name);
       const auto why = bad_variable_name(name);
       REQUIRE(why.has_value());

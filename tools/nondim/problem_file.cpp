@@ -286,8 +286,24 @@ bool invisible(char32_t cp) noexcept {
 /// the groups printed (`a*b`, `T-inf`).
 bool operator_sign(char32_t cp) noexcept {
   switch (cp) {
-    case '+': case '-': case '*': case '/': case '^': case '(': case ')': case '[': case ']': case '{': case '}':
-    case 0x00B7: case 0x00D7: case 0x00F7: case 0x2212: case 0x2215: case 0x22C5: case 0x2044:
+    case '+':
+    case '-':
+    case '*':
+    case '/':
+    case '^':
+    case '(':
+    case ')':
+    case '[':
+    case ']':
+    case '{':
+    case '}':
+    case 0x00B7:
+    case 0x00D7:
+    case 0x00F7:
+    case 0x2212:
+    case 0x2215:
+    case 0x22C5:
+    case 0x2044:
       return true;
     default:
       return false;

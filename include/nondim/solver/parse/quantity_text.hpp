@@ -6,8 +6,8 @@
 #include <array>
 #include <charconv>
 #include <cmath>
-#include <limits>
 #include <cstddef>
+#include <limits>
 #include <string>
 #include <string_view>
 #include <system_error>
@@ -83,8 +83,8 @@ inline quantity_parts read_quantity_parts(std::string_view text) {
     i += s.len;
   }
   const auto first = classify_at(text, i, e).cls;
-  const bool starts_number = first == char_class::digit ||
-                             (first == char_class::dot && classify_at(text, i + 1, e).cls == char_class::digit);
+  const bool starts_number =
+      first == char_class::digit || (first == char_class::dot && classify_at(text, i + 1, e).cls == char_class::digit);
   if (!starts_number) {
     if (i == e) bad_number(text, i, "expected a number, found the end of the text");
     bad_number(text, i,

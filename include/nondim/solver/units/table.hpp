@@ -183,12 +183,12 @@ inline constexpr std::array unit_table{
     // conventional inch of mercury: exactly 25.4 conventional mmHg (B.8: 3.386 389 E+03 Pa)
     detail::plain("inHg", "inch of mercury, conventional", 25.4 * detail::mm_mercury, dims::pressure, detail::nist_b8),
     // conventional water columns (B.8: inH2O 2.490 889 E+02, ftH2O 2.989 067 E+03, mmH2O 9.806 65 E+00 Pa)
-    detail::plain("inH2O", "inch of water, conventional", detail::inch * detail::water_column_per_metre,
-                  dims::pressure, detail::nist_b8),
-    detail::plain("ftH2O", "foot of water, conventional", detail::foot * detail::water_column_per_metre,
-                  dims::pressure, detail::nist_b8),
-    detail::plain("mmH2O", "millimetre of water, conventional", 1.0e-3 * detail::water_column_per_metre,
-                  dims::pressure, detail::nist_b8),
+    detail::plain("inH2O", "inch of water, conventional", detail::inch* detail::water_column_per_metre, dims::pressure,
+                  detail::nist_b8),
+    detail::plain("ftH2O", "foot of water, conventional", detail::foot* detail::water_column_per_metre, dims::pressure,
+                  detail::nist_b8),
+    detail::plain("mmH2O", "millimetre of water, conventional", 1.0e-3 * detail::water_column_per_metre, dims::pressure,
+                  detail::nist_b8),
     detail::plain("Btu", "British thermal unit (International Table)", detail::btu_it, dims::energy, detail::nist_b8),
     detail::plain("hp", "horsepower (550 ft lbf/s)", 550.0 * detail::foot * detail::pound_force, dims::power,
                   detail::nist_b8),
@@ -218,13 +218,26 @@ struct unit_alias {
   std::string_view symbol;
 };
 inline constexpr std::array unit_aliases{
-    unit_alias{"l", "L"},           unit_alias{"lbm", "lb"},       unit_alias{"Ohm", "\u03a9"},
-    unit_alias{"\u2126", "\u03a9"}, unit_alias{"\u00b0C", "degC"}, unit_alias{"\u2103", "degC"},
-    unit_alias{"\u00b0F", "degF"},  unit_alias{"\u2109", "degF"},  unit_alias{"\u00b0R", "degR"},
-    unit_alias{"\u00b0", "deg"},    unit_alias{"kn", "knot"},      unit_alias{"kt", "knot"},
-    unit_alias{"BTU", "Btu"},       unit_alias{"torr", "Torr"},    unit_alias{"\u212b", "\u00c5"},
-    unit_alias{"r/min", "rpm"},     unit_alias{"tonne", "t"},      unit_alias{"mmH\u2082O", "mmH2O"},
-    unit_alias{"inH\u2082O", "inH2O"}, unit_alias{"ftH\u2082O", "ftH2O"},
+    unit_alias{"l", "L"},
+    unit_alias{"lbm", "lb"},
+    unit_alias{"Ohm", "\u03a9"},
+    unit_alias{"\u2126", "\u03a9"},
+    unit_alias{"\u00b0C", "degC"},
+    unit_alias{"\u2103", "degC"},
+    unit_alias{"\u00b0F", "degF"},
+    unit_alias{"\u2109", "degF"},
+    unit_alias{"\u00b0R", "degR"},
+    unit_alias{"\u00b0", "deg"},
+    unit_alias{"kn", "knot"},
+    unit_alias{"kt", "knot"},
+    unit_alias{"BTU", "Btu"},
+    unit_alias{"torr", "Torr"},
+    unit_alias{"\u212b", "\u00c5"},
+    unit_alias{"r/min", "rpm"},
+    unit_alias{"tonne", "t"},
+    unit_alias{"mmH\u2082O", "mmH2O"},
+    unit_alias{"inH\u2082O", "inH2O"},
+    unit_alias{"ftH\u2082O", "ftH2O"},
 };
 
 /// \brief SI prefixes, longest symbol first where one is a prefix of another ("da" before "d").

@@ -57,10 +57,12 @@ inline constexpr std::array<std::pair<std::string_view, std::string_view>, 21> u
     {"kph", "; write `km/h`"},
     {"cfm", "; write `ft^3/min`"},
     {"psia", "; write `psi` (absolute pressures need no mark)"},
-    {"psig", "; a gauge pressure is relative to the local atmosphere, which a unit cannot carry: write the "
-             "absolute pressure in `psi` (gauge plus atmospheric)"},
-    {"barg", "; a gauge pressure is relative to the local atmosphere, which a unit cannot carry: write the "
-             "absolute pressure in `bar` (gauge plus atmospheric)"},
+    {"psig",
+     "; a gauge pressure is relative to the local atmosphere, which a unit cannot carry: write the "
+     "absolute pressure in `psi` (gauge plus atmospheric)"},
+    {"barg",
+     "; a gauge pressure is relative to the local atmosphere, which a unit cannot carry: write the "
+     "absolute pressure in `bar` (gauge plus atmospheric)"},
     {"ohm", "; write `Ohm`"},
     {"rps", "; write `1/s` for revolutions per second (a rotational frequency) or `rad/s` for an angular velocity"},
     {"ton", "; write `t` (tonne) or `TR` (ton of refrigeration): `ton` alone is ambiguous"},

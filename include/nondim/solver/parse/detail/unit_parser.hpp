@@ -392,7 +392,9 @@ class unit_parser {
     }
     const std::string_view number = span(b, pos_);
     if (number == "1") return;
-    std::string why = "a number is not a unit: " + quote_token(number) + "; a unit expression holds units only (the value is given apart from it) and scales are written as SI prefixes (`km`, `mPa`)";
+    std::string why = "a number is not a unit: " + quote_token(number) +
+                      "; a unit expression holds units only (the value is given apart from it) and scales are written "
+                      "as SI prefixes (`km`, `mPa`)";
     std::size_t k = b;  // "m^2/3": a fraction meant as the power
     while (k > begin_ && (text_[k - 1] == ' ' || text_[k - 1] == '\t')) --k;
     if (k > begin_ && text_[k - 1] == '/' && k >= begin_ + 2 && text_[k - 2] >= '0' && text_[k - 2] <= '9')
