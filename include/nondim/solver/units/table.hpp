@@ -63,8 +63,8 @@ inline constexpr double pound_force = pound_mass * standard_gravity;  // 4.44822
 inline constexpr double btu_it = 1055.05585262;
 inline constexpr double us_gallon = 231.0 * inch * inch * inch;  // 231 in^3 (B.8: 3.785 412 E-03 m^3)
 // Conventional mercury: 13.5951 g/cm^3 under standard gravity, so 1 mmHg = 13595.1 kg/m^3 *
-// 0.001 m * 9.80665 m/s^2 = 133.322 387 415 Pa exactly (NIST SP 811 B.8, footnote on
-// conventional mercury and water); the decimal below is that exact value.
+// 0.001 m * 9.80665 m/s^2 = 133.322 387 415 Pa exactly (NIST SP 811 B.8 footnote on
+// conventional mercury and water, from memory); the decimal below is that exact value.
 inline constexpr double mm_mercury = 133.322387415;
 // Conventional water: 1000 kg/m^3 under standard gravity (NIST SP 811 B.8, footnote).
 inline constexpr double water_column_per_metre = 1000.0 * standard_gravity;
@@ -160,9 +160,10 @@ inline constexpr std::array unit_table{
     detail::plain("rpm", "revolution per minute (rotational frequency)", 1.0 / 60.0, dims::frequency,
                   "ISO 80000-3, rotational frequency; NIST SP 811 (2008) B.8 (r/min)"),
     detail::plain("rev", "revolution (plane angle, 2 pi rad)", 2.0 * detail::pi, dims::dimensionless, detail::nist_b8),
-    // ratios (SI Brochure 9th ed., 5.4.7: % is 0.01; ppm is 10^-6, a customary abbreviation)
+    // ratios: % is the number 0.01 (SI Brochure 9th ed., 5.4.7); ppm is 10^-6, an abbreviation
+    // the Brochure discourages but engineers write
     detail::plain("%", "percent", 1.0e-2, dims::dimensionless, "SI Brochure 9th ed., 5.4.7"),
-    detail::plain("ppm", "part per million", 1.0e-6, dims::dimensionless, "SI Brochure 9th ed., 5.4.7"),
+    detail::plain("ppm", "part per million", 1.0e-6, dims::dimensionless, "common practice, no source"),
     // US customary and imperial units, never prefixed (NIST SP 811 Appendix B.8)
     detail::plain("ft", "foot", detail::foot, dims::length, detail::nist_b8),
     detail::plain("in", "inch", detail::inch, dims::length, detail::nist_b8),
