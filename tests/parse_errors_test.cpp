@@ -83,8 +83,29 @@ TEST_SUITE("parse_errors") {
     check_fault("N\u00b7m\u00b7Kelvin", unit_error_kind::unknown_symbol, 5, "`Kelvin`");
   }
 
+  TEST_CASE("hints that point the right way (common practice, no source)") {
+    // `mile` is one edit from `mil` (a thousandth of an inch, NIST SP 811 B.8); the mile is `mi`
+    check_fault("mile", unit_error_kind::unknown_symbol, 1, "write `mi`");
+    CHECK(fault_of("mile").message.find("did you mean `mil`") == std::string::npos);
+    // a gauge pressure needs the atmosphere it is measured from: no unit converts it
+    check_fault("psig", unit_error_kind::unknown_symbol, 1, "gauge pressure");
+    CHECK(fault_of("psig").message.find("psi*g") == std::string::npos);
+    // `deg C` would be an angle times a coulomb (SI Brochure 9th ed., table 4: C)
+    check_fault("deg C", unit_error_kind::unknown_symbol, 1, "write `degC`");
+    check_fault("J/(kg*deg F)", unit_error_kind::unknown_symbol, 7, "write `degF`");
+    check_fault("\u00b0 C", unit_error_kind::unknown_symbol, 1, "write `degC`");
+    // `r/min` is a unit (ISO 80000-3), not the prefix ronto on nothing; a power after it is refused
+    CHECK(parse_unit("r/min").factor == 1.0 / 60.0);
+    CHECK(parse_unit("m^3/(r/min)").factor == 60.0);
+    check_fault("r/min^2", unit_error_kind::bad_exponent, 6, "(r/min)^2");
+    // `ppm` is a unit now, no longer one edit from `rpm`
+    CHECK(parse_unit("ppm").factor == 1.0e-6);
+  }
+
   TEST_CASE("a number other than 1 is refused with a hint") {
-    check_fault("1000 m", unit_error_kind::number_factor, 1, "parse_quantity");
+    // the hint speaks of values and units, never of a C++ function: program users read it too
+    check_fault("1000 m", unit_error_kind::number_factor, 1, "units only");
+    CHECK(fault_of("1000 m").message.find("parse_quantity") == std::string::npos);
     check_fault("2*m", unit_error_kind::number_factor, 1, "prefixes");
     check_fault("m*10", unit_error_kind::number_factor, 3, "`10`");
     check_fault("1.0/s", unit_error_kind::number_factor, 1, "`1.0`");

@@ -114,12 +114,98 @@ TEST_SUITE("parse_quantity") {
     CHECK(parse_quantity("5 degC/min").value == doctest::Approx(5.0 / 60.0).epsilon(1e-15));
   }
 
+  TEST_CASE("a lone degC or degF is read as a point or a difference only when asked") {
+    // SI Brochure 9th ed., 2.3.1: t/degC = T/K - 273.15, and a Celsius interval equals a
+    // kelvin interval; NIST SP 811 B.9: T/K = (t/degF + 459.67)/1.8, a Fahrenheit interval 5/9 K
+    try {
+      (void)parse_quantity<dims::temperature>("40 degC");
+      FAIL("the ambiguous reading was accepted");
+    } catch (const unit_error& e) {
+      CHECK(e.kind() == unit_error_kind::ambiguous_temperature);
+      CHECK(e.column() == 1);
+      CHECK(std::string(e.what()).find("parse_temperature_point") != std::string::npos);
+      CHECK(std::string(e.what()).find("parse_temperature_difference") != std::string::npos);
+    }
+    CHECK_THROWS_AS((void)parse_quantity<dims::temperature>("68 \u00b0F"), unit_error);
+    CHECK(parse_quantity<dims::temperature>("5 degR").si() == doctest::Approx(25.0 / 9.0).epsilon(1e-15));
+    CHECK(parse_temperature_point("40 degC").kelvin() == doctest::Approx(313.15).epsilon(1e-15));
+    CHECK(parse_temperature_point("40 degC").celsius() == doctest::Approx(40.0).epsilon(1e-13));
+    CHECK(parse_temperature_point("212 degF").kelvin() == doctest::Approx(373.15).epsilon(1e-15));
+    CHECK(parse_temperature_point("300 K").kelvin() == 300.0);
+    CHECK(parse_temperature_point("491.67 degR").kelvin() == doctest::Approx(273.15).epsilon(1e-15));
+    CHECK(parse_temperature_difference("40 degC").si() == 40.0);
+    CHECK(parse_temperature_difference("9 degF").si() == doctest::Approx(5.0).epsilon(1e-15));
+    CHECK(parse_temperature_difference("-3 K").si() == -3.0);
+    CHECK_THROWS_AS((void)parse_temperature_point("3 m"), dimension_error);
+    CHECK_THROWS_AS((void)parse_temperature_difference("3 Pa"), dimension_error);
+  }
+
+  TEST_CASE("a temperature reading below absolute zero is an error that names it") {
+    // SI Brochure 9th ed., 2.3.1: the thermodynamic temperature is not negative; -300 degC is -26.85 K
+    try {
+      (void)parse_quantity("x -300 degC");
+      FAIL("no exception");
+    } catch (const unit_error& e) {
+      CHECK(e.kind() == unit_error_kind::bad_number);
+    }
+    try {
+      (void)parse_quantity("  -300 degC");
+      FAIL("no exception");
+    } catch (const temperature_error& e) {
+      CHECK(e.kind() == unit_error_kind::below_absolute_zero);
+      CHECK(e.column() == 3);
+      CHECK(e.kelvin() == doctest::Approx(-26.85).epsilon(1e-12));
+      CHECK(std::string(e.what()).find("-300 degC") != std::string::npos);
+      CHECK(std::string(e.what()).find("-26.85 K") != std::string::npos);
+    }
+    CHECK_THROWS_AS((void)parse_temperature_point("-1 K"), temperature_error);
+    CHECK_THROWS_AS((void)parse_temperature_point("-460 degF"), temperature_error);  // -459.67 degF is 0 K
+    CHECK_THROWS_AS((void)convert(-300.0, "degC", "K"), temperature_error);
+    CHECK_THROWS_AS((void)convert(-1.0, "K", "degC"), temperature_error);
+    // absolute zero itself is allowed and lands on zero exactly (NIST SP 811 B.9: 0 K = -459.67 degF)
+    CHECK(parse_temperature_point("-273.15 degC").kelvin() == 0.0);
+    CHECK(parse_temperature_point("-459.67 degF").kelvin() == 0.0);
+    CHECK(convert(-459.67, "degF", "K") == 0.0);
+    // a difference may be negative: nothing is checked for linear units
+    CHECK(convert(-300.0, "degC/s", "K/s") == -300.0);
+    CHECK(parse_temperature_difference("-300 degC").si() == -300.0);
+  }
+
+  TEST_CASE("a converted reading within rounding of zero is zero") {
+    // NIST SP 811 B.9: T/K = (t/degF + 459.67)/1.8 = T/degR / 1.8; 491.67 degR = 273.15 K = 0 degC,
+    // 32 degF = 0 degC (common practice)
+    CHECK(convert(491.67, "degR", "degC") == 0.0);
+    CHECK(convert(32.0, "degF", "degC") == 0.0);
+    CHECK(convert(273.15, "K", "degC") == 0.0);
+    CHECK(convert(0.0, "degC", "degF") == doctest::Approx(32.0).epsilon(1e-15));
+    CHECK(convert(100.0, "degC", "degF") == doctest::Approx(212.0).epsilon(1e-15));
+  }
+
+  TEST_CASE("a conversion between angular velocity and rotational frequency is flagged") {
+    // ISO 80000-3: omega = 2 pi n; one revolution is 2 pi rad (NIST SP 811 B.8), a factor the
+    // dimensions cannot see: 60 r/min is 1 Hz, 2 pi rad/s
+    CHECK(convert(60.0, "rpm", "Hz") == doctest::Approx(1.0).epsilon(1e-15));
+    CHECK(convert(60.0, "r/min", "1/s") == doctest::Approx(1.0).epsilon(1e-15));
+    CHECK(crosses_rotational_families("rpm", "rad/s"));
+    CHECK(crosses_rotational_families("rad/s", "Hz"));
+    CHECK(crosses_rotational_families("rev/min", "rpm"));
+    CHECK(crosses_rotational_families("deg/s", "1/s"));
+    CHECK(crosses_rotational_families("rad/s^2", "rpm/s"));
+    CHECK_FALSE(crosses_rotational_families("rpm", "Hz"));
+    CHECK_FALSE(crosses_rotational_families("rad/s", "deg/s"));
+    CHECK_FALSE(crosses_rotational_families("rev/min", "rad/s"));
+    CHECK_FALSE(crosses_rotational_families("rad", "1"));  // an angle, not a rate
+    CHECK_FALSE(crosses_rotational_families("m/s", "km/h"));
+    CHECK(mentions_plane_angle("\u00b0/s"));
+    CHECK_FALSE(mentions_plane_angle("r/min"));
+  }
+
   TEST_CASE("the typed form returns a quantity or names both dimensions") {
     const auto p = parse_quantity<dims::pressure>("1 atm");
     CHECK(p.si() == 101325.0);  // NIST SP 811 B.8: 1.013 25 E+05 Pa exactly
     const auto k = parse_quantity<dims::thermal_conductivity>("0.6 W/(m*K)");  // water, common practice
     CHECK(k.si() == 0.6);
-    const auto T = parse_quantity<dims::temperature>("0 degC");
+    const auto T = parse_quantity<dims::temperature>("273.15 K");  // kelvin is one reading
     CHECK(T.si() == 273.15);
     CHECK_THROWS_AS((void)parse_quantity<dims::length>("3 s"), dimension_error);
     try {

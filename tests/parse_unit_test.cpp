@@ -112,6 +112,14 @@ const published table[] = {
     {"mmHg", 1.333224e+02, 7, pressure, "NIST SP 811 B.8: millimeter of mercury, conventional, 1.333 224 E+02 Pa"},
     {"inHg", 3.386389e+03, 7, pressure, "NIST SP 811 B.8: inch of mercury, conventional, 3.386 389 E+03 Pa"},
     {"inH2O", 2.490889e+02, 7, pressure, "NIST SP 811 B.8: inch of water, conventional, 2.490 889 E+02 Pa"},
+    {"ftH2O", 2.989067e+03, 7, pressure, "NIST SP 811 B.8: foot of water, conventional, 2.989 067 E+03 Pa"},
+    {"mmH2O", 9.80665e+00, 0, pressure, "NIST SP 811 B.8: millimeter of water, conventional, 9.806 65 E+00 Pa (exact)"},
+    {"mmH\u2082O", 9.80665e+00, 0, pressure, "NIST SP 811 B.8: millimeter of water, conventional (subscript two)"},
+    // ---- volume, flow, area, mass
+    {"gpm", 6.309020e-05, 7, volume / dims::time, "NIST SP 811 B.8: gallon (U.S.) per minute (gpm), 6.309 020 E-05 m^3/s"},
+    {"gal_imp", 4.54609e-03, 0, volume, "NIST SP 811 B.8: gallon [Canadian and U.K. (Imperial)], 4.546 09 E-03 m^3 (exact)"},
+    {"acre", 4.0468564224e+03, 0, area, "NIST SP 811 B.8: acre = 43 560 ft^2, on the international foot (0.3048 m)"},
+    {"tonne", 1.0e+03, 0, mass, "SI Brochure 9th ed., table 8: tonne, 1 t = 10^3 kg"},
     // ---- viscosity
     {"cP", 1.0e-03, 0, dynamic_viscosity, "NIST SP 811 B.8: centipoise, 1.0 E-03 Pa s (exact)"},
     {"P", 1.0e-01, 0, dynamic_viscosity, "NIST SP 811 B.8: poise, 1.0 E-01 Pa s (exact)"},
@@ -156,7 +164,15 @@ const published table[] = {
     {"\u00b0F s/Btu", 5.265651e-04, 7, thermal_resistance, "NIST SP 811 B.8: degree Fahrenheit second per Btu_IT, 5.265 651 E-04 K/W"},
     // ---- angle and rotation
     {"deg", 1.745329e-02, 7, dimensionless, "NIST SP 811 B.8: degree (angle), 1.745 329 E-02 rad"},
-    {"rpm", 1.047198e-01, 7, frequency, "NIST SP 811 B.8: revolution per minute, 1.047 198 E-01 rad/s"},
+    // rpm is a rotational frequency, 1/60 s^-1 (ISO 80000-3, n in r/min); NIST SP 811 B.8
+    // prints revolution per minute as 1.047 198 E-01 rad/s, the angular velocity 2 pi n,
+    // which is what a revolution (2 pi rad) per minute gives
+    {"rpm", 1.0 / 60.0, 0, frequency, "ISO 80000-3: rotational frequency, 1 r/min = 1/60 s^-1"},
+    {"r/min", 1.0 / 60.0, 0, frequency, "ISO 80000-3: rotational frequency, r/min"},
+    {"rev/min", 1.047198e-01, 7, frequency, "NIST SP 811 B.8: revolution per minute, 1.047 198 E-01 rad/s"},
+    // ---- ratios
+    {"%", 1.0e-02, 0, dimensionless, "SI Brochure 9th ed., 5.4.7: % stands for 0.01"},
+    {"ppm", 1.0e-06, 0, dimensionless, "common practice, no source: part per million, 10^-6"},
     // ---- SI Brochure 9th ed.: coherent derived units in base units (table 4)
     {"N", 1.0, 0, mass * length / (dims::time * dims::time), "SI Brochure 9th ed., table 4: N = kg m s^-2"},
     {"Pa", 1.0, 0, mass / (length * dims::time * dims::time), "SI Brochure 9th ed., table 4: Pa = kg m^-1 s^-2"},

@@ -343,16 +343,16 @@ TEST_SUITE("similarity") {
     CHECK(close(*plan.dependent.prototype_over_model, p_factor));
     CHECK(close(*plan.find("P")->prototype, 9.0 * p_factor));
     CHECK(plan.dependent.rule == "P_p/P_m = (N_p/N_m)^3 * (D_p/D_m)^5 * (rho_p/rho_m)");
-    // flow coefficient Q/(N D^3) in SI, with rpm = 2 pi/60 rad/s (NIST SP 811 B.8 lists
-    // revolution per minute as 1/60 r/s; one revolution is 2 pi rad)
-    const double omega = 1450.0 * 2.0 * 3.14159265358979323846 / 60.0;
-    CHECK(close(*group(plan, "C_Q").prototype, (540.0 / 3600.0) / (omega * std::pow(0.4, 3))));
+    // flow coefficient Q/(n D^3) in SI with n the rotational frequency in r/s (ISO 80000-3;
+    // White, Fluid Mechanics, 7th ed., section 11.4, from memory: C_Q = Q/(n D^3), n in r/s): rpm is 1/60 s^-1
+    const double n = 1450.0 / 60.0;
+    CHECK(close(*group(plan, "C_Q").prototype, (540.0 / 3600.0) / (n * std::pow(0.4, 3))));
   }
 
   TEST_CASE("variables made from unit text carry factors and dimensions from the parser") {
     // The pump of the previous case, every unit read from text: the factors are those of
-    // the unit table (NIST SP 811 B.8 for rpm: 1/60 r/s, one revolution 2 pi rad; SI
-    // Brochure 9th ed. for h, kW and mm), and the dimensions let the groups be checked.
+    // the unit table (ISO 80000-3 for rpm: a rotational frequency, 1/60 s^-1; SI Brochure
+    // 9th ed. for h, kW and mm), and the dimensions let the groups be checked.
     similarity_problem p;
     p.dependent = "P";
     p.add(make_similarity_variable("P", "kW", std::nullopt, 9.0))
@@ -369,8 +369,8 @@ TEST_SUITE("similarity") {
     const auto plan = plan_similarity(p);
     CHECK(plan.status == similarity_status::exact);
     CHECK(close(*plan.model("Q"), 540.0 * 2.0 * std::pow(250.0 / 400.0, 3)));
-    const double omega = 1450.0 * 2.0 * 3.14159265358979323846 / 60.0;
-    CHECK(close(*group(plan, "C_Q").prototype, (540.0 / 3600.0) / (omega * std::pow(0.4, 3))));
+    const double n = 1450.0 / 60.0;  // r/s
+    CHECK(close(*group(plan, "C_Q").prototype, (540.0 / 3600.0) / (n * std::pow(0.4, 3))));
     // a head coefficient written with the wrong power of D is caught
     p.groups[2].exponents = {0, 0, 1, -2, -1, 0};
     CHECK_THROWS_WITH_AS(plan_similarity(p), doctest::Contains("is not dimensionless"), similarity_error);

@@ -47,5 +47,6 @@
 
 #include "solver/parse/errors.hpp"
 #include "solver/parse/quantity_text.hpp"
+#include "solver/parse/temperature_text.hpp"
 #include "solver/parse/unit_format.hpp"
 #include "solver/parse/unit_parser.hpp"

@@ -192,6 +192,21 @@ def check_dim(v, problems):
     dimension(v["dimension"], "dimension", problems)
 
 
+def check_convert(v, problems):
+    """convert --format json: one object with the value given, both units, the converted
+    value and the notes (a list of sentences, empty when there is nothing to say)."""
+    if not keys(v, "root", ["input", "from", "to", "value", "notes"], [], problems):
+        return
+    for k in ("input", "value"):
+        if not is_number(v[k]):
+            problems.append("%s: must be a number" % k)
+    for k in ("from", "to"):
+        if not isinstance(v[k], str) or not v[k]:
+            problems.append("%s: must be a unit expression" % k)
+    if not isinstance(v["notes"], list) or not all(isinstance(n, str) and n for n in v["notes"]):
+        problems.append("notes: must be a list of sentences")
+
+
 def check_scale(v, problems):
     if not keys(v, "root", ["status", "model", "free", "groups", "dependent"], [], problems):
         return
@@ -221,7 +236,7 @@ def check_scale(v, problems):
 
 def check(schema, value):
     problems = []
-    {"groups": check_groups, "dim": check_dim, "scale": check_scale}[schema](value, problems)
+    {"groups": check_groups, "dim": check_dim, "scale": check_scale, "convert": check_convert}[schema](value, problems)
     return problems
 
 

@@ -90,5 +90,20 @@ for name, value in {"negative factor": {"factor": -1, "dimension": {}},
     if not check_schema.check("dim", value):
         print("FAIL: not rejected:", name)
         failures += 1
-print("%d passed, %d failed" % (len(cases) + 3 - failures, failures))
+convert_good = {"input": 60, "from": "rpm", "to": "Hz", "value": 1, "notes": []}
+convert_bad = {
+    "no notes": {k: v for k, v in convert_good.items() if k != "notes"},
+    "value as text": dict(convert_good, value="1"),
+    "empty unit": dict(convert_good, to=""),
+    "notes not sentences": dict(convert_good, notes=[1]),
+    "extra key": dict(convert_good, extra=1),
+}
+if check_schema.check("convert", convert_good):
+    print("FAIL: the valid convert object is rejected:", check_schema.check("convert", convert_good))
+    failures += 1
+for name, value in convert_bad.items():
+    if not check_schema.check("convert", value):
+        print("FAIL: not rejected:", name)
+        failures += 1
+print("%d passed, %d failed" % (len(cases) + len(convert_bad) + 4 - failures, failures))
 sys.exit(1 if failures else 0)

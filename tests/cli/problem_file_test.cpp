@@ -157,6 +157,34 @@ TEST_SUITE("problem file") {
     CHECK(bare_errors == 0xFFFF - 0x80 + 1 - 0x800);  // every one refused with its line
   }
 
+  TEST_CASE("names with invisible characters or signs of operation are refused") {
+    using nondim::tool::bad_variable_name;
+    // Unicode general category Cf (format characters, UnicodeData.txt, from memory): a
+    // right-to-left mark, a zero-width space, joiners, a byte-order mark, a soft hyphen;
+    // and spaces beyond ASCII (Zs). Each shows nothing, so `D` and `D` + mark look alike.
+    for (const char* name : {"D\u200F", "D\u200B", "D\u200C", "D\u200D", "\uFEFFD", "D\u00AD", "D\u2060", "D\u202E",
+                             "D\u2066", "D\u00A0", "D\u3000", "D\u2009"}) {
+      CAPTURE(name);
+      const auto why = bad_variable_name(name);
+      REQUIRE(why.has_value());
+      CHECK(why->find("invisible character U+") != std::string::npos);
+    }
+    CHECK(bad_variable_name("D\u200F")->find("'D<U+200F>'") != std::string::npos);
+    // signs of operation (ISO 80000-2) would read as a formula in the printed groups
+    for (const char* name : {"a*b", "a/b", "T-inf", "a+b", "x^2", "f(x)", "a\u00b7b", "a\u2212b", "a\u00d7b"}) {
+      CAPTURE(name);
+      const auto why = bad_variable_name(name);
+      REQUIRE(why.has_value());
+      CHECK(why->find("a sign of operation") != std::string::npos);
+    }
+    CHECK(bad_variable_name("a*b")->find("a_b") != std::string::npos);
+    // names engineers write are accepted: Greek letters, subscripts, digits, primes
+    for (const char* name : {"rho", "\u03c1", "mu_w", "T_inf", "D2", "U\u221e", "c_p", "x'", "\u0394T"})
+      CHECK_FALSE(bad_variable_name(name).has_value());
+    // bytes that are not UTF-8 (a command-line argument can hold them)
+    CHECK(bad_variable_name("a\xff")->find("not valid UTF-8") != std::string::npos);
+  }
+
   TEST_CASE("a file larger than the limit is refused unread") {
     try {
       (void)nondim::tool::load_problem_file("/dev/zero");

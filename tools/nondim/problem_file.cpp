@@ -14,6 +14,8 @@
 #define TOML_HEADER_ONLY 1
 #include <toml++/toml.h>
 
+#include <nondim/solver/parse/detail/text.hpp>
+
 #include "messages.hpp"
 
 namespace nondim::tool {
@@ -261,6 +263,61 @@ std::string problem_file::at(const file_position& p) const {
   return path + ":" + std::to_string(p.line) + ": ";
 }
 
+namespace {
+
+/// Characters that show nothing or move the text (Unicode general category Cf, the
+/// separators Zl and Zp and the spaces Zs beyond ASCII, the C1 controls): a name holding
+/// one looks like another name, or like nothing (Unicode Standard, ch. 23, "Format characters";
+/// the ranges are those of UnicodeData.txt for Cf, from memory).
+bool invisible(char32_t cp) noexcept {
+  constexpr std::pair<char32_t, char32_t> ranges[] = {
+      {0x0080, 0x00A0},   {0x00AD, 0x00AD},   {0x0600, 0x0605},   {0x061C, 0x061C},   {0x06DD, 0x06DD},
+      {0x070F, 0x070F},   {0x08E2, 0x08E2},   {0x1680, 0x1680},   {0x180E, 0x180E},   {0x2000, 0x200F},
+      {0x2028, 0x202F},   {0x205F, 0x2064},   {0x2066, 0x206F},   {0x3000, 0x3000},   {0xFEFF, 0xFEFF},
+      {0xFFF9, 0xFFFB},   {0x110BD, 0x110BD}, {0x110CD, 0x110CD}, {0x13430, 0x1343F}, {0x1BCA0, 0x1BCA3},
+      {0x1D173, 0x1D17A}, {0xE0001, 0xE0001}, {0xE0020, 0xE007F},
+  };
+  for (const auto& [lo, hi] : ranges)
+    if (cp >= lo && cp <= hi) return true;
+  return false;
+}
+
+/// Signs of operations in formulas (ISO 80000-2): a name holding one reads as a formula in
+/// the groups printed (`a*b`, `T-inf`).
+bool operator_sign(char32_t cp) noexcept {
+  switch (cp) {
+    case '+':
+    case '-':
+    case '*':
+    case '/':
+    case '^':
+    case '(':
+    case ')':
+    case '[':
+    case ']':
+    case '{':
+    case '}':
+    case 0x00B7:
+    case 0x00D7:
+    case 0x00F7:
+    case 0x2212:
+    case 0x2215:
+    case 0x22C5:
+    case 0x2044:
+      return true;
+    default:
+      return false;
+  }
+}
+
+std::string hex_code_point(char32_t cp) {
+  char buffer[16];
+  std::snprintf(buffer, sizeof buffer, "U+%04X", static_cast<unsigned>(cp));
+  return buffer;
+}
+
+}  // namespace
+
 std::optional<std::string> bad_variable_name(std::string_view name) {
   if (name.empty()) return "a variable name must not be empty";
   for (const char ch : name) {
@@ -270,6 +327,29 @@ std::optional<std::string> bad_variable_name(std::string_view name) {
     if (ch == '=' || ch == ',')
       return "the variable name '" + std::string(name) + "' has a '" + std::string(1, ch) +
              "' (names may not contain '=' or ',')";
+  }
+  if (const std::size_t bad = detail::first_invalid_utf8(name); bad != name.size())
+    return "the variable name is not valid UTF-8 (byte " + std::to_string(bad + 1) + ")";
+  for (std::size_t i = 0; i < name.size();) {
+    const std::size_t n = detail::utf8_length(name, i);
+    const char32_t cp = detail::utf8_decode(name, i, n);
+    if (invisible(cp)) {
+      std::string shown(name.substr(0, i));
+      shown += "<" + hex_code_point(cp) + ">";
+      shown += name.substr(i + n);
+      return "the variable name '" + shown + "' has the invisible character " + hex_code_point(cp) +
+             " (a format character or space that shows nothing): retype the name";
+    }
+    if (operator_sign(cp)) {
+      std::string joined(name.substr(0, i));  // the sign as an underscore: `a*b` -> `a_b`
+      joined += '_';
+      joined += name.substr(i + n);
+      return "the variable name '" + std::string(name) + "' has '" + std::string(name.substr(i, n)) +
+             "', a sign of operation, and would read as a formula in the groups: a name is one symbol "
+             "(write, for example, " +
+             joined + ")";
+    }
+    i += n;
   }
   return std::nullopt;
 }

@@ -23,6 +23,33 @@ namespace {
   throw input_error(m);
 }
 
+/// The variable already in `p` whose name is written like `name` in reports (`rho` and
+/// `ρ` both print as ρ), or empty.
+std::string same_symbol_as(const nondim::problem& p, const std::string& name) {
+  const std::string shown = display_name(name);
+  for (const auto& v : p.variables())
+    if (display_name(v.name) == shown) return v.name;
+  return {};
+}
+
+/// "; the problem takes at most 1000 variables" when `p` is full, else empty.
+std::string too_many_variables(const nondim::problem& p) {
+  if (p.size() < max_problem_variables) return {};
+  return "more than " + std::to_string(max_problem_variables) +
+         " variables (the analysis grows as the square of their number; real problems have a few dozen)";
+}
+
+/// `p.add`, with any refusal of the library as bad input that says where (`where` ends in
+/// ": "): the checks above come first, this keeps a new check of the library from reaching
+/// the user as an internal error.
+void add_variable(nondim::problem& p, const std::string& name, const std::string& unit, const std::string& where) {
+  try {
+    p.add(name, unit);
+  } catch (const analysis_error& e) {
+    throw input_error(with_prefix(where + std::string(bare_message(e))));
+  }
+}
+
 std::string trim(std::string_view s) {
   const auto b = s.find_first_not_of(" \t");
   if (b == std::string_view::npos) return {};
@@ -50,6 +77,11 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
     if (const auto why = bad_variable_name(name)) throw input_error(with_prefix(where + ": " + *why));
     if (in.problem.index_of(name))
       throw input_error(with_prefix(where + ": the variable '" + name + "' is given twice"));
+    if (const std::string other = same_symbol_as(in.problem, name); !other.empty())
+      throw input_error(with_prefix(where + ": the variables '" + other + "' and '" + name + "' are both written " +
+                                    display_name(name) + " in the groups; rename one"));
+    if (const std::string why = too_many_variables(in.problem); !why.empty())
+      throw input_error(with_prefix(where + ": " + why));
     try {
       (void)parse_unit(unit);
     } catch (const unit_error& e) {
@@ -57,7 +89,7 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
       if (a.size() <= 200) m += "\n" + caret_block(a, code_points(std::string_view(a).substr(0, eq + 1)) + e.column());
       throw input_error(m);
     }
-    in.problem.add(name, unit);
+    add_variable(in.problem, name, unit, where + ": ");
     in.report.notes.emplace_back();
   }
   return in;
@@ -68,12 +100,18 @@ problem_input problem_from_file(const std::string& path) {
   in.file = load_problem_file(path);
   const problem_file& f = *in.file;
   for (const file_variable& v : f.variables) {
+    const std::string line = f.at(v.where);
+    if (const std::string other = same_symbol_as(in.problem, v.name); !other.empty())
+      throw input_error(with_prefix(line + "the variables '" + other + "' and '" + v.name + "' are both written " +
+                                    display_name(v.name) + " in the groups; rename one"));
+    if (const std::string why = too_many_variables(in.problem); !why.empty())
+      throw input_error(with_prefix(line + "variable '" + v.name + "': " + why));
     try {
       (void)parse_unit(v.unit);
     } catch (const unit_error& e) {
       bad_file_unit(f, v, e);
     }
-    in.problem.add(v.name, v.unit);
+    add_variable(in.problem, v.name, v.unit, line);
     in.report.notes.push_back(v.note);
   }
   in.report.title = f.title;
@@ -122,7 +160,11 @@ nondim::analysis analyze_input(const problem_input& in) {
     } else if (in.file) {
       where = in.file->path + ": ";
     }
-    throw input_error(with_prefix(where + std::string(bare_message(e))));
+    std::string hint;  // `ρ` given for a variable named `rho`, or the other way round
+    if (!v.empty() && !in.problem.index_of(v))
+      if (const std::string other = same_symbol_as(in.problem, v); !other.empty())
+        hint = " (did you mean '" + other + "'?)";
+    throw input_error(with_prefix(where + std::string(bare_message(e)) + hint));
   }
 }
 

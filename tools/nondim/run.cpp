@@ -88,8 +88,10 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     } catch (const input_error& e) {
       err << e.what() << '\n';
       return exit_bad_input;
-    } catch (const std::exception& e) {
-      err << "nondim: internal error: " << e.what() << '\n';
+    } catch (const std::exception& e) {  // the library's messages begin "nondim: " too: one prefix
+      std::string_view what = e.what();
+      if (what.rfind("nondim: ", 0) == 0) what.remove_prefix(8);
+      err << "nondim: internal error: " << what << '\n';
       return exit_internal;
     } catch (...) {
       err << "nondim: internal error\n";

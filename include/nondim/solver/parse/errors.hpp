@@ -32,6 +32,8 @@ enum class unit_error_kind {
   too_long,                ///< text longer than `max_unit_text_bytes`
   unexpected_character,    ///< a character that has no place there ("m+s", "m,s", "m(s)")
   bad_number,              ///< the value of a quantity is not a number, or out of range
+  below_absolute_zero,     ///< a temperature reading below 0 K ("-300 degC"); thrown as `temperature_error`
+  ambiguous_temperature,   ///< a lone `degC`/`degF` where a point and a difference differ by the offset
 };
 
 /// \brief A unit expression (or quantity text) that cannot be read.
@@ -50,6 +52,22 @@ class unit_error : public std::invalid_argument {
  private:
   unit_error_kind kind_;
   std::size_t column_;
+};
+
+/// \brief A temperature reading below absolute zero (`-300 degC`, `-5 K` converted to
+/// `degC`): no thermodynamic temperature is negative (SI Brochure 9th ed., 2.3.1).
+/// `kelvin()` is the value it would have had; `column()` is that of the number in quantity
+/// text, 0 when the value came as a number (`convert`).
+class temperature_error : public unit_error {
+ public:
+  temperature_error(std::size_t column, double kelvin, const std::string& message)
+      : unit_error(unit_error_kind::below_absolute_zero, column, message), kelvin_(kelvin) {}
+
+  /// \brief The thermodynamic temperature the input stands for, in kelvin (below zero).
+  [[nodiscard]] double kelvin() const noexcept { return kelvin_; }
+
+ private:
+  double kelvin_;
 };
 
 /// \brief A dimension other than the one required (a quantity for a typed slot, a

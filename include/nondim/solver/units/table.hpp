@@ -61,6 +61,13 @@ inline constexpr double pound_mass = 0.45359237;
 inline constexpr double standard_gravity = 9.80665;                   // SI Brochure 9th ed. / CGPM 1901
 inline constexpr double pound_force = pound_mass * standard_gravity;  // 4.4482216152605 N
 inline constexpr double btu_it = 1055.05585262;
+inline constexpr double us_gallon = 231.0 * inch * inch * inch;  // 231 in^3 (B.8: 3.785 412 E-03 m^3)
+// Conventional mercury: 13.5951 g/cm^3 under standard gravity, so 1 mmHg = 13595.1 kg/m^3 *
+// 0.001 m * 9.80665 m/s^2 = 133.322 387 415 Pa exactly (NIST SP 811 B.8 footnote on
+// conventional mercury and water, from memory); the decimal below is that exact value.
+inline constexpr double mm_mercury = 133.322387415;
+// Conventional water: 1000 kg/m^3 under standard gravity (NIST SP 811 B.8, footnote).
+inline constexpr double water_column_per_metre = 1000.0 * standard_gravity;
 inline constexpr double pi = 3.141592653589793238462643383279502884;
 
 using namespace nondim::dims;
@@ -144,11 +151,19 @@ inline constexpr std::array unit_table{
     detail::plain("kgf", "kilogram-force", detail::standard_gravity, dims::force, detail::nist_b8),
     detail::plain("atm", "standard atmosphere", 101325.0, dims::pressure, detail::nist_b8),
     detail::plain("Torr", "torr", 101325.0 / 760.0, dims::pressure, detail::nist_b8),
-    detail::plain("mmHg", "millimetre of mercury, conventional", 133.322387415, dims::pressure, detail::nist_b8),
+    detail::plain("mmHg", "millimetre of mercury, conventional", detail::mm_mercury, dims::pressure, detail::nist_b8),
     detail::plain("nmi", "nautical mile", 1852.0, dims::length, detail::nist_b8),
     detail::plain("knot", "knot", 1852.0 / 3600.0, dims::velocity, detail::nist_b8),
-    detail::plain("rpm", "revolution per minute", 2.0 * detail::pi / 60.0, dims::frequency, detail::nist_b8),
-    detail::plain("rev", "revolution", 2.0 * detail::pi, dims::dimensionless, detail::nist_b8),
+    // Rotational frequency n (ISO 80000-3: revolutions per unit time, unit 1/s,
+    // r/min in practice): the n of pump and propeller coefficients. An angular velocity
+    // (omega = 2 pi n) is written in rad/s; `convert` says when a conversion crosses the two.
+    detail::plain("rpm", "revolution per minute (rotational frequency)", 1.0 / 60.0, dims::frequency,
+                  "ISO 80000-3, rotational frequency; NIST SP 811 (2008) B.8 (r/min)"),
+    detail::plain("rev", "revolution (plane angle, 2 pi rad)", 2.0 * detail::pi, dims::dimensionless, detail::nist_b8),
+    // ratios: % is the number 0.01 (SI Brochure 9th ed., 5.4.7); ppm is 10^-6, an abbreviation
+    // the Brochure discourages but engineers write
+    detail::plain("%", "percent", 1.0e-2, dims::dimensionless, "SI Brochure 9th ed., 5.4.7"),
+    detail::plain("ppm", "part per million", 1.0e-6, dims::dimensionless, "common practice, no source"),
     // US customary and imperial units, never prefixed (NIST SP 811 Appendix B.8)
     detail::plain("ft", "foot", detail::foot, dims::length, detail::nist_b8),
     detail::plain("in", "inch", detail::inch, dims::length, detail::nist_b8),
@@ -166,15 +181,29 @@ inline constexpr std::array unit_table{
                   dims::pressure, detail::nist_b8),
     detail::plain("ksi", "kip per square inch", 1000.0 * detail::pound_force / (detail::inch * detail::inch),
                   dims::pressure, detail::nist_b8),
-    detail::plain("inHg", "inch of mercury, conventional", 3386.38864, dims::pressure, detail::nist_b8),
-    detail::plain("inH2O", "inch of water, conventional", detail::inch * 1000.0 * detail::standard_gravity,
-                  dims::pressure, detail::nist_b8),
+    // conventional inch of mercury: exactly 25.4 conventional mmHg (B.8: 3.386 389 E+03 Pa)
+    detail::plain("inHg", "inch of mercury, conventional", 25.4 * detail::mm_mercury, dims::pressure, detail::nist_b8),
+    // conventional water columns (B.8: inH2O 2.490 889 E+02, ftH2O 2.989 067 E+03, mmH2O 9.806 65 E+00 Pa)
+    detail::plain("inH2O", "inch of water, conventional", detail::inch* detail::water_column_per_metre, dims::pressure,
+                  detail::nist_b8),
+    detail::plain("ftH2O", "foot of water, conventional", detail::foot* detail::water_column_per_metre, dims::pressure,
+                  detail::nist_b8),
+    detail::plain("mmH2O", "millimetre of water, conventional", 1.0e-3 * detail::water_column_per_metre, dims::pressure,
+                  detail::nist_b8),
     detail::plain("Btu", "British thermal unit (International Table)", detail::btu_it, dims::energy, detail::nist_b8),
     detail::plain("hp", "horsepower (550 ft lbf/s)", 550.0 * detail::foot * detail::pound_force, dims::power,
                   detail::nist_b8),
     detail::plain("TR", "ton of refrigeration (12000 Btu/h)", 12000.0 * detail::btu_it / 3600.0, dims::power,
                   detail::nist_b8),
-    detail::plain("gal", "gallon (US liquid)", 231.0 * detail::inch * detail::inch * detail::inch, dims::volume,
+    detail::plain("gal", "gallon (US liquid)", detail::us_gallon, dims::volume, detail::nist_b8),
+    // gallon per minute (B.8: 6.309 020 E-05 m^3/s)
+    detail::plain("gpm", "gallon (US) per minute", detail::us_gallon / 60.0, dims::volume / dims::time,
+                  detail::nist_b8),
+    // imperial gallon: 4.546 09 L exactly (B.8: gallon [Canadian and U.K. (Imperial)] = 4.546 09 E-03 m^3)
+    detail::plain("gal_imp", "gallon (imperial)", 4.54609e-3, dims::volume, detail::nist_b8),
+    // acre of 43 560 ft^2 on the international foot (B.8 lists 4.046 873 E+03 m^2 on the US
+    // survey foot, which the United States retired at the end of 2022): 4046.856 422 4 m^2
+    detail::plain("acre", "acre (international foot)", 43560.0 * detail::foot * detail::foot, dims::area,
                   detail::nist_b8),
     detail::plain("mph", "mile per hour", 5280.0 * detail::foot / 3600.0, dims::velocity, detail::nist_b8),
     detail::plain("lbmol", "pound-mole", 1000.0 * detail::pound_mass, dims::amount, "common practice, no source"),
@@ -190,11 +219,26 @@ struct unit_alias {
   std::string_view symbol;
 };
 inline constexpr std::array unit_aliases{
-    unit_alias{"l", "L"},           unit_alias{"lbm", "lb"},       unit_alias{"Ohm", "\u03a9"},
-    unit_alias{"\u2126", "\u03a9"}, unit_alias{"\u00b0C", "degC"}, unit_alias{"\u2103", "degC"},
-    unit_alias{"\u00b0F", "degF"},  unit_alias{"\u2109", "degF"},  unit_alias{"\u00b0R", "degR"},
-    unit_alias{"\u00b0", "deg"},    unit_alias{"kn", "knot"},      unit_alias{"kt", "knot"},
-    unit_alias{"BTU", "Btu"},       unit_alias{"torr", "Torr"},    unit_alias{"\u212b", "\u00c5"},
+    unit_alias{"l", "L"},
+    unit_alias{"lbm", "lb"},
+    unit_alias{"Ohm", "\u03a9"},
+    unit_alias{"\u2126", "\u03a9"},
+    unit_alias{"\u00b0C", "degC"},
+    unit_alias{"\u2103", "degC"},
+    unit_alias{"\u00b0F", "degF"},
+    unit_alias{"\u2109", "degF"},
+    unit_alias{"\u00b0R", "degR"},
+    unit_alias{"\u00b0", "deg"},
+    unit_alias{"kn", "knot"},
+    unit_alias{"kt", "knot"},
+    unit_alias{"BTU", "Btu"},
+    unit_alias{"torr", "Torr"},
+    unit_alias{"\u212b", "\u00c5"},
+    unit_alias{"r/min", "rpm"},
+    unit_alias{"tonne", "t"},
+    unit_alias{"mmH\u2082O", "mmH2O"},
+    unit_alias{"inH\u2082O", "inH2O"},
+    unit_alias{"ftH\u2082O", "ftH2O"},
 };
 
 /// \brief SI prefixes, longest symbol first where one is a prefix of another ("da" before "d").

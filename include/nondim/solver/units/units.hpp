@@ -54,6 +54,9 @@ inline constexpr auto ha = table_unit<dims::area>("ha");
 inline constexpr auto L = table_unit<dims::volume>("L");
 inline constexpr auto mL = table_unit<dims::volume>("mL");
 inline constexpr auto gal = table_unit<dims::volume>("gal");
+inline constexpr auto gal_imp = table_unit<dims::volume>("gal_imp");
+inline constexpr auto acre = table_unit<dims::area>("acre");
+inline constexpr auto gpm = table_unit<dims::volume / dims::time>("gpm");
 // mass
 inline constexpr auto kg = table_unit<dims::mass>("kg");
 inline constexpr auto g = table_unit<dims::mass>("g");
@@ -75,6 +78,8 @@ inline constexpr auto d = table_unit<dims::time>("d");
 inline constexpr auto Hz = table_unit<dims::frequency>("Hz");
 inline constexpr auto kHz = table_unit<dims::frequency>("kHz");
 inline constexpr auto MHz = table_unit<dims::frequency>("MHz");
+/// Rotational frequency n in revolutions per minute, 1/60 s^-1 (ISO 80000-3); an angular
+/// velocity is omega = 2 pi n, written in rad/s.
 inline constexpr auto rpm = table_unit<dims::frequency>("rpm");
 // angle (dimensionless)
 inline constexpr auto rad = table_unit<dims::dimensionless>("rad");
@@ -106,6 +111,8 @@ inline constexpr auto Torr = table_unit<dims::pressure>("Torr");
 inline constexpr auto mmHg = table_unit<dims::pressure>("mmHg");
 inline constexpr auto inHg = table_unit<dims::pressure>("inHg");
 inline constexpr auto inH2O = table_unit<dims::pressure>("inH2O");
+inline constexpr auto ftH2O = table_unit<dims::pressure>("ftH2O");
+inline constexpr auto mmH2O = table_unit<dims::pressure>("mmH2O");
 inline constexpr auto psi = table_unit<dims::pressure>("psi");
 inline constexpr auto ksi = table_unit<dims::pressure>("ksi");
 // energy and power

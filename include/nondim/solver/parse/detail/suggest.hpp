@@ -39,31 +39,40 @@ constexpr bool within_one_edit(std::string_view a, std::string_view b) noexcept 
   return a.substr(i) == b.substr(i + 1);  // one insertion
 }
 
-/// Words people write for units, and the symbol to write instead.
-inline constexpr std::array<std::pair<std::string_view, std::string_view>, 16> unit_word_hints{{
-    {"sec", "s"},
-    {"secs", "s"},
-    {"hr", "h"},
-    {"hrs", "h"},
-    {"mins", "min"},
-    {"lbs", "lb"},
-    {"liter", "L"},
-    {"litre", "L"},
-    {"micron", "um"},
-    {"degK", "K"},
-    {"\u00b0K", "K"},
-    {"kph", "km/h"},
-    {"gpm", "gal/min"},
-    {"cfm", "ft^3/min"},
-    {"psia", "psi (absolute pressures need no mark)"},
-    {"ohm", "Ohm"},
+/// Words people write for units, and what to write instead (the end of the message).
+inline constexpr std::array<std::pair<std::string_view, std::string_view>, 21> unit_word_hints{{
+    {"sec", "; write `s`"},
+    {"secs", "; write `s`"},
+    {"hr", "; write `h`"},
+    {"hrs", "; write `h`"},
+    {"mins", "; write `min`"},
+    {"lbs", "; write `lb`"},
+    {"liter", "; write `L`"},
+    {"litre", "; write `L`"},
+    {"micron", "; write `um`"},
+    {"mile", "; write `mi` (`mil` is a thousandth of an inch)"},
+    {"miles", "; write `mi` (`mil` is a thousandth of an inch)"},
+    {"degK", "; write `K`"},
+    {"\u00b0K", "; write `K`"},
+    {"kph", "; write `km/h`"},
+    {"cfm", "; write `ft^3/min`"},
+    {"psia", "; write `psi` (absolute pressures need no mark)"},
+    {"psig",
+     "; a gauge pressure is relative to the local atmosphere, which a unit cannot carry: write the "
+     "absolute pressure in `psi` (gauge plus atmospheric)"},
+    {"barg",
+     "; a gauge pressure is relative to the local atmosphere, which a unit cannot carry: write the "
+     "absolute pressure in `bar` (gauge plus atmospheric)"},
+    {"ohm", "; write `Ohm`"},
+    {"rps", "; write `1/s` for revolutions per second (a rotational frequency) or `rad/s` for an angular velocity"},
+    {"ton", "; write `t` (tonne) or `TR` (ton of refrigeration): `ton` alone is ambiguous"},
 }};
 
 /// A hint for `token`, which names no unit: "; did you mean `kPa`?" or empty.
 inline std::string unknown_symbol_hint(std::string_view token) {
   if (token.empty() || token.size() > 64) return {};
-  for (const auto& [word, symbol] : unit_word_hints)
-    if (token == word) return "; write `" + std::string(symbol) + "`";
+  for (const auto& [word, hint] : unit_word_hints)
+    if (token == word) return std::string(hint);
   for (const auto& p : prefix_table)
     if (token == p.symbol)
       return "; `" + std::string(token) + "` is an SI prefix (10^" + std::to_string(p.exponent) +

@@ -77,7 +77,7 @@ constexpr std::size_t column_of(std::string_view s, std::size_t at) noexcept {
 enum class char_class : std::uint8_t {
   end,          ///< past the end of the range
   space,        ///< ASCII white space, no-break and thin spaces: a product between factors
-  letter,       ///< starts or continues a unit symbol
+  letter,       ///< starts or continues a unit symbol (and `%`)
   digit,        ///< ASCII digit: a number, or inside a symbol after its first character
   times,        ///< '*', U+00B7 middle dot, U+22C5 dot operator
   solidus,      ///< '/'
@@ -104,6 +104,7 @@ constexpr std::array<char_class, 128> make_ascii_classes() {
   for (unsigned char c = 'A'; c <= 'Z'; ++c) t[c] = char_class::letter;
   for (unsigned char c = '0'; c <= '9'; ++c) t[c] = char_class::digit;
   t['_'] = char_class::letter;
+  t['%'] = char_class::letter;  // the percent symbol (SI Brochure 9th ed., 5.4.7)
   t[' '] = t['\t'] = t['\n'] = t['\r'] = t['\v'] = t['\f'] = char_class::space;
   t['*'] = char_class::times;
   t['/'] = char_class::solidus;

@@ -125,11 +125,19 @@ inline std::string trimmed(std::string_view t) {
   return std::string(t);
 }
 
+/// A unit of plane angle: the radian and the units defined from it (degree, revolution).
+inline bool is_plane_angle(const unit_entry& e) noexcept {
+  return e.symbol == "rad" || e.symbol == "deg" || e.symbol == "rev";
+}
+
 class unit_parser {
  public:
   /// Parse bytes [begin, end) of `text`; columns in errors count from the start of `text`.
   unit_parser(std::string_view text, std::size_t begin, std::size_t end) noexcept
       : text_(text), begin_(begin), pos_(begin), end_(end), fault_(begin) {}
+
+  /// Whether a symbol of plane angle (`rad`, `deg`, `rev`) was read.
+  [[nodiscard]] bool plane_angle_seen() const noexcept { return plane_angle_; }
 
   parsed_unit parse() {
     unit_value acc;
@@ -149,6 +157,7 @@ class unit_parser {
   std::size_t pos_;
   std::size_t end_;
   std::size_t fault_;  // where an overflow inside rational arithmetic is reported
+  bool plane_angle_ = false;
 
   [[nodiscard]] char_info at(std::size_t i) const noexcept { return classify_at(text_, i, end_); }
   [[nodiscard]] std::string_view span(std::size_t b, std::size_t e) const noexcept { return text_.substr(b, e - b); }
@@ -310,15 +319,48 @@ class unit_parser {
     parse_power(f, factor_begin);
   }
 
+  /// End of the run of symbol characters from byte `i`.
+  [[nodiscard]] std::size_t symbol_end(std::size_t i) const noexcept {
+    for (char_info c = at(i); c.cls == char_class::letter || c.cls == char_class::digit; c = at(i)) i += c.len;
+    return i;
+  }
+
   void parse_symbol(unit_value& f) {
     const std::size_t b = pos_;
-    for (char_info c = at(pos_); c.cls == char_class::letter || c.cls == char_class::digit; c = at(pos_)) pos_ += c.len;
-    const std::string_view symbol = span(b, pos_);
+    pos_ = symbol_end(pos_);
+    std::string_view symbol = span(b, pos_);
+    // a symbol written with a solidus in the table (`r/min`) is one symbol; a power after
+    // it would be read as (r/min)^n by some and r/min^n by others, so it is refused
+    if (at(pos_).cls == char_class::solidus && at(pos_ + 1).cls == char_class::letter) {
+      const std::size_t e = symbol_end(pos_ + 1);
+      if (find_unit_entry(span(b, e)) != nullptr) {
+        symbol = span(b, e);
+        pos_ = e;
+        std::size_t k = pos_;
+        while (at(k).cls == char_class::space) k += at(k).len;
+        if (at(k).cls == char_class::caret || at(k).cls == char_class::superscript || double_star(k))
+          fail(unit_error_kind::bad_exponent, k,
+               "a power after " + quote_token(symbol) + " is ambiguous: bracket it, as in `(" + std::string(symbol) +
+                   ")^2`");
+      }
+    }
+    // `deg C` reads as degree times coulomb, `deg F` as degree times farad: never meant
+    if (symbol == "deg" || symbol == "\u00b0") {
+      std::size_t k = pos_;
+      while (at(k).cls == char_class::space) k += at(k).len;
+      if (k > pos_ && (text_.substr(k, 1) == "C" || text_.substr(k, 1) == "F") && symbol_end(k) == k + 1)
+        fail(unit_error_kind::unknown_symbol, b,
+             "`" + std::string(symbol) + " " + std::string(text_.substr(k, 1)) +
+                 "` is not a temperature unit (it reads as an angle times a " +
+                 (text_[k] == 'C' ? "coulomb" : "farad") + "); write `deg" + std::string(text_.substr(k, 1)) +
+                 "` without the space");
+    }
     const auto r = resolve_unit_symbol(symbol);
     if (!r)
       fail(unit_error_kind::unknown_symbol, b,
            "unknown unit symbol " + quote_token(symbol) + unknown_symbol_hint(symbol));
     const unit_entry& e = *r->entry;
+    if (is_plane_angle(e)) plane_angle_ = true;
     f.exps = e.dim.exponents;
     const int prefix = r->prefix != nullptr ? r->prefix->exponent : 0;
     if (e.decade != no_decade) {
@@ -350,8 +392,9 @@ class unit_parser {
     }
     const std::string_view number = span(b, pos_);
     if (number == "1") return;
-    std::string why = "a number is not a unit: " + quote_token(number) + "; give values to parse_quantity (\"" +
-                      std::string(number.substr(0, 24)) + " m\") and scales as SI prefixes (`km`, `mPa`)";
+    std::string why = "a number is not a unit: " + quote_token(number) +
+                      "; a unit expression holds units only (the value is given apart from it) and scales are written "
+                      "as SI prefixes (`km`, `mPa`)";
     std::size_t k = b;  // "m^2/3": a fraction meant as the power
     while (k > begin_ && (text_[k - 1] == ' ' || text_[k - 1] == '\t')) --k;
     if (k > begin_ && text_[k - 1] == '/' && k >= begin_ + 2 && text_[k - 2] >= '0' && text_[k - 2] <= '9')
@@ -643,6 +686,22 @@ inline parsed_unit parse_unit_range(std::string_view text, std::size_t b, std::s
 inline parsed_unit parse_unit(std::string_view text) {
   detail::check_unit_text(text);
   return detail::parse_unit_range(text, 0, text.size());
+}
+
+/// \brief Whether the unit expression `text` has a symbol of plane angle (`rad`, `deg`,
+/// `°`, `rev`) among its factors: `rad/s` and `rev/min` do, `rpm`, `Hz` and `1/s` do not.
+/// \throws unit_error as `parse_unit`.
+inline bool mentions_plane_angle(std::string_view text) {
+  detail::check_unit_text(text);
+  std::size_t b = 0;
+  std::size_t t = text.size();
+  while (b < t && (text[b] == ' ' || text[b] == '\t')) ++b;
+  while (t > b && (text[t - 1] == ' ' || text[t - 1] == '\t')) --t;
+  if (const unit_entry* u = find_unit_entry(text.substr(b, t - b)); u != nullptr && t > b)
+    return detail::is_plane_angle(*u);
+  detail::unit_parser p(text, 0, text.size());
+  (void)p.parse();
+  return p.plane_angle_seen();
 }
 
 }  // namespace nondim
