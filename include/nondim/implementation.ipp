@@ -17,6 +17,7 @@
 #include "analysis/extraction/runtime_scales.ipp"
 #include "analysis/extraction/svd_check.ipp"
 #include "analysis/extraction/text.ipp"
+#include "analysis/data/group_value.ipp"
 #include "analysis/names/named_basis.ipp"
 #include "analysis/report/json.ipp"
 #include "analysis/report/latex.ipp"
