@@ -72,8 +72,11 @@ subcommand add_groups(CLI::App& app) {
         try {
           (void)group_values(a, in.report.point);  // a value that no group can take (0 where it divides) is bad input
         } catch (const analysis_error& e) {
-          throw input_error(
-              with_prefix((in.file ? in.file->path + ": " : std::string()) + std::string(bare_message(e))));
+          const file_variable* fv = in.file ? in.file->find(e.variable()) : nullptr;
+          const std::string where = fv != nullptr && fv->value ? in.file->at(fv->value->where)
+                                    : in.file                  ? in.file->path + ": "
+                                                               : std::string();
+          throw input_error(with_prefix(where + std::string(bare_message(e))));
         }
         if (args->scales && args->format == "latex")
           throw input_error(with_prefix("--scales is available with --format text, markdown or json, not latex"));

@@ -6,6 +6,7 @@
 #include <string_view>
 #include <utility>
 
+#include <nondim/data.hpp>
 #include <nondim/parse.hpp>
 
 #include "messages.hpp"
@@ -51,9 +52,9 @@ number_in_unit file_number(const problem_file& f, const file_quantity& q, const 
       throw input_error(with_prefix(where + "unit '" + std::string(unit) + "': " + std::string(bare_message(e))));
     }
     if (u.dim != var.dim)
-      throw input_error(with_prefix(where + "'" + q.text + "' is " + si_unit_string(u.dim, text_form::ascii) +
-                                    ", but the variable's unit " + var.unit + " is " +
-                                    si_unit_string(var.dim, text_form::ascii)));
+      throw input_error(with_prefix(where + "'" + q.text + "' has the dimension of " +
+                                    si_unit_string(u.dim, text_form::ascii) + ", but the variable's unit " + var.unit +
+                                    " has that of " + si_unit_string(var.dim, text_form::ascii)));
     return {x, u.factor, u.offset};
   } catch (const value_text_error& e) {
     throw input_error(with_prefix(where + e.what()));
@@ -88,7 +89,7 @@ measured_value file_measured(const problem_file& f, const file_variable& fv, con
       const number_in_unit u = file_number(f, q, var, "uncertainty");
       if (u.number < 0.0)
         throw input_error(with_prefix(where + "a standard uncertainty is >= 0, not " +
-                                      (q.number ? std::to_string(*q.number) : q.text)));
+                                      (q.number ? round_for_report(*q.number).value_text : q.text)));
       m.uncertainty = u.number * u.factor;  // a width: the scale's zero does not move it
     }
   }
