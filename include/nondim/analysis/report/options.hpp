@@ -17,7 +17,7 @@ struct report_options {
   /// Values of the variables (SI): every group whose variables all have one is reported
   /// with its value, its standard uncertainty when they all have one too, and the regimes
   /// of the named numbers it is (regimes.hpp).
-  design_point point;
+  design_point point{};
 };
 
 }  // namespace nondim
