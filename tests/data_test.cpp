@@ -212,6 +212,11 @@ TEST_SUITE("data") {
     CHECK(j["groups"][0]["regimes"][0]["regime"] == "subsonic: compressibility matters");
     CHECK(contains(markdown_report(a, o), "| 0.3499 | 0.0059 |"));
     CHECK(contains(latex_report(a, o), "= 0.3499, \\quad u(\\Pi_{1}) = 0.0059"));
+    // Mach 0.31 +- 0.01: the threshold 0.3 lies within 2u (k = 2, GUM 6.2), and the note says so
+    report_options near;
+    near.point.set(p, "U", 0.31 * 343, 0.01 * 343).set(p, "c", 343, 0.0);
+    CHECK(contains(text_report(a, near), "the threshold 0.3 is within two standard uncertainties"));
+    CHECK_FALSE(contains(text, "within two standard uncertainties"));
     // without a design point, nothing changes
     CHECK_FALSE(contains(text_report(a), "standard uncertainty"));
     CHECK_FALSE(contains(text_report(a), "note: "));

@@ -56,6 +56,20 @@ inline std::string band_text(const regime_note& n) {
   return s;
 }
 
+/// "; the threshold 2300 is within two standard uncertainties" when the number's interval of
+/// +-2u (k = 2, about 95 % for a normal distribution, GUM 6.2-6.3) holds a bound of its band.
+inline std::string near_threshold(const regime_note& n, const nondim::group_value& v) {
+  const auto rel = v.relative_uncertainty();
+  if (!rel) return {};
+  const double reach = 2.0 * *rel * std::abs(n.number);
+  const double magnitude = std::abs(n.number);
+  if (n.lower > 0.0 && magnitude - n.lower <= reach)
+    return "; the threshold " + round_for_report(n.lower).value_text + " is within two standard uncertainties";
+  if (std::isfinite(n.upper) && n.upper - magnitude <= reach)
+    return "; the threshold " + round_for_report(n.upper).value_text + " is within two standard uncertainties";
+  return {};
+}
+
 /// One ASCII sentence per regime of every group with a value, in group order:
 /// "Π2: Re = 19960: turbulent (Re >= 4000) for flow in a circular pipe, ...; source: ...".
 /// `form` picks the group label: Π2 or Pi2.
@@ -69,7 +83,7 @@ inline std::vector<std::string> regime_sentences(const analysis& a,
       out.push_back((form == text_form::unicode ? "\u03a0" : "Pi") + std::to_string(k + 1) + ": " +
                     std::string(n.symbol) + " = " + regime_number(n, *values[k]).value_text + ": " +
                     std::string(n.regime) + " (" + band_text(n) + ") for " + std::string(n.configuration) +
-                    "; source: " + std::string(n.source));
+                    near_threshold(n, *values[k]) + "; source: " + std::string(n.source));
   }
   return out;
 }
