@@ -11,13 +11,13 @@
 
 #include "nondim.hpp"
 
+#include "analysis/data/group_value.ipp"
 #include "analysis/extraction/analyze.ipp"
 #include "analysis/extraction/explain.ipp"
 #include "analysis/extraction/null_space.ipp"
 #include "analysis/extraction/runtime_scales.ipp"
 #include "analysis/extraction/svd_check.ipp"
 #include "analysis/extraction/text.ipp"
-#include "analysis/data/group_value.ipp"
 #include "analysis/names/named_basis.ipp"
 #include "analysis/report/json.ipp"
 #include "analysis/report/latex.ipp"
