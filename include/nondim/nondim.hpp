@@ -4,6 +4,7 @@
 /// include the cheaper <nondim/quantity.hpp>.
 
 #include "analysis.hpp"
+#include "data.hpp"
 #include "field.hpp"
 #include "parse.hpp"
 #include "quantity.hpp"

@@ -5,6 +5,7 @@
 /// analysis layer only; no JSON library.
 
 #include "analysis.hpp"
+#include "data.hpp"
 
 #include "analysis/report/json.hpp"
 #include "analysis/report/latex.hpp"

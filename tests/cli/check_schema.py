@@ -102,7 +102,7 @@ def check_groups(v, problems):
         groups = groups if isinstance(groups, list) else []
     for i, g in enumerate(groups):
         w = "groups[%d]" % i
-        if not keys(g, w, ["exponents", "text", "latex", "matches"], [], problems):
+        if not keys(g, w, ["exponents", "text", "latex", "matches"], ["value", "uncertainty", "regimes"], problems):
             continue
         total = {b: Fraction(0) for b in BASES}
         ints = []
@@ -132,6 +132,7 @@ def check_groups(v, problems):
                 if not isinstance(m["name"], str) or not isinstance(m["symbol"], str):
                     problems.append("%s: name and symbol must be strings" % mw)
                 exponent(m["power"], mw + ".power", problems)
+        check_value(g, w, problems)
     s = v["svd_check"]
     if keys(s, "svd_check", ["rank", "agrees", "singular_values", "max_residual"], [], problems):
         if not isinstance(s["agrees"], bool) or s["agrees"] != (s["rank"] == rank):
@@ -143,6 +144,34 @@ def check_groups(v, problems):
             problems.append("svd_check.max_residual: must be a non-negative number")
     if "scales" in v:
         check_scales(v["scales"], names, dims, rep if isinstance(rep, list) else [], problems)
+
+
+def check_value(g, w, problems):
+    """A group at a design point: `value` a number; `uncertainty` (only with a value) a
+    number >= 0 with at most two significant digits (GUM 7.2.6); `regimes` (only with a
+    value) objects naming one of the group's matches, with their band and source."""
+    if "value" not in g:
+        if "uncertainty" in g or "regimes" in g:
+            problems.append("%s: uncertainty or regimes without a value" % w)
+        return
+    if not is_number(g["value"]):
+        problems.append("%s.value: not a number" % w)
+    if "uncertainty" in g:
+        u = g["uncertainty"]
+        if not is_number(u) or u < 0:
+            problems.append("%s.uncertainty: not a number >= 0" % w)
+        elif u > 0 and len(("%.15g" % u).replace(".", "").replace("-", "").split("e")[0].strip("0")) > 2:
+            problems.append("%s.uncertainty: %r has more than two significant digits" % (w, u))
+    symbols = [m.get("symbol") for m in g.get("matches", []) if isinstance(m, dict)]
+    for k, r in enumerate(g.get("regimes", [])):
+        rw = "%s.regimes[%d]" % (w, k)
+        if keys(r, rw, ["symbol", "number", "regime", "bounds", "configuration", "source"], [], problems):
+            if r["symbol"] not in symbols:
+                problems.append("%s: %r is not one of the group's matches" % (rw, r["symbol"]))
+            if not is_number(r["number"]):
+                problems.append("%s.number: not a number" % rw)
+            if not all(isinstance(r[k], str) and r[k] for k in ["regime", "bounds", "configuration", "source"]):
+                problems.append("%s: regime, bounds, configuration and source must be non-empty strings" % rw)
 
 
 def check_scales(scales, names, dims, rep, problems):

@@ -74,7 +74,32 @@ cases.update({
     "scale missing key": broken_scales(lambda v: v["scales"][1].pop("scale")),
 })
 
+# at a design point: 1/Re = 2.004e-5 with u = 5.7e-7 (Re = 49900, turbulent in a pipe)
+valued = copy.deepcopy(good)
+valued["groups"][1].update(value=2.004e-5, uncertainty=5.7e-7, regimes=[
+    {"symbol": "Re", "number": 49900, "regime": "turbulent", "bounds": "Re >= 4000",
+     "configuration": "flow in a circular pipe", "source": "a textbook"}])
+
+
+def broken_value(edit):
+    v = copy.deepcopy(valued)
+    edit(v)
+    return v
+
+
+cases.update({
+    "uncertainty without a value": broken_value(lambda v: v["groups"][1].pop("value")),
+    "value not a number": broken_value(lambda v: v["groups"][1].update(value="2e-5")),
+    "negative uncertainty": broken_value(lambda v: v["groups"][1].update(uncertainty=-5.7e-7)),
+    "uncertainty of three digits": broken_value(lambda v: v["groups"][1].update(uncertainty=5.68e-7)),
+    "regime of another number": broken_value(lambda v: v["groups"][1]["regimes"][0].update(symbol="Ma")),
+    "regime without source": broken_value(lambda v: v["groups"][1]["regimes"][0].pop("source")),
+})
+
 failures = 0
+if check_schema.check("groups", valued):
+    print("FAIL: the valid object with values is rejected:", check_schema.check("groups", valued))
+    failures += 1
 if check_schema.check("groups", scaled):
     print("FAIL: the valid object with scales is rejected:", check_schema.check("groups", scaled))
     failures += 1

@@ -1,12 +1,14 @@
 // The problem-file loader of the nondim program: the schema of DESIGN.md (variables keep
-// their order; title, dependent, repeating, name, unit, note, prototype, model), and every
-// fault named with its key and line. TOML syntax per the TOML 1.0.0 specification.
+// their order; title, dependent, repeating, name, unit, note, value, uncertainty, prototype,
+// model), and every fault named with its key and line. TOML syntax per the TOML 1.0.0
+// specification. Also the reader of values after NAME= on the command line.
 #include <doctest/doctest.h>
 
 #include <string>
 
 #include "messages.hpp"
 #include "problem_file.hpp"
+#include "value_text.hpp"
 
 using nondim::tool::input_error;
 using nondim::tool::parse_problem_text;
@@ -23,6 +25,71 @@ std::string message_of(const std::string& text) {
 }  // namespace
 
 TEST_SUITE("problem file") {
+  TEST_CASE("value and uncertainty are numbers or strings, and an uncertainty needs a value") {
+    const auto f = parse_problem_text(
+        "[[variable]]\nname = \"U\"\nunit = \"m/s\"\nvalue = 2\nuncertainty = \"2 %\"\n"
+        "[[variable]]\nname = \"D\"\nunit = \"mm\"\nvalue = \"0.025 m\"\nuncertainty = 0.05\n"
+        "[[variable]]\nname = \"L\"\nunit = \"m\"\n",
+        "p.toml");
+    REQUIRE(f.variables.size() == 3);
+    REQUIRE(f.variables[0].value);
+    CHECK(f.variables[0].value->number == 2.0);
+    CHECK(f.variables[0].value->where.line == 4);
+    CHECK(f.variables[0].uncertainty->text == "2 %");
+    CHECK(f.variables[1].value->text == "0.025 m");
+    CHECK(f.variables[1].uncertainty->number == 0.05);
+    CHECK_FALSE(f.variables[2].value);
+    CHECK(message_of("[[variable]]\nname = \"U\"\nunit = \"m/s\"\nvalue = [1]\n") ==
+          "nondim: p.toml:4: 'value' of variable 1 must be a number or a string (998 or \"998 kg/m^3\"), not an array");
+    CHECK(message_of("[[variable]]\nname = \"U\"\nunit = \"m/s\"\nuncertainty = 1\n") ==
+          "nondim: p.toml:1: variable 1 ('U') has an 'uncertainty' but no 'value'");
+    CHECK(message_of("[[variable]]\nname = \"U\"\nunit = \"m/s\"\nvalue = nan\n") ==
+          "nondim: p.toml:4: 'value' of variable 1 must be a finite number");
+  }
+
+  TEST_CASE("a value after NAME= is told from a unit, with its uncertainty in every spelling") {
+    using nondim::tool::read_value_argument;
+    CHECK_FALSE(read_value_argument("m/s"));
+    CHECK_FALSE(read_value_argument("1"));  // the unit of a pure number
+    CHECK_FALSE(read_value_argument("1/s"));
+    auto v = read_value_argument("2 m/s");
+    REQUIRE(v);
+    CHECK(v->value == 2.0);
+    CHECK_FALSE(v->uncertainty);
+    CHECK(v->unit == "m/s");
+    v = read_value_argument("0.71");
+    REQUIRE(v);
+    CHECK(v->unit == "1");
+    for (const char* text : {"2\u00b10.1 m/s", "2+-0.1 m/s", "2 +/- 0.1 m/s", "2 \u00b1 0.1 m/s"}) {
+      v = read_value_argument(text);
+      REQUIRE(v);
+      CHECK(v->value == 2.0);
+      CHECK(v->uncertainty == 0.1);
+      CHECK_FALSE(v->percent);
+      CHECK(v->unit == "m/s");
+    }
+    v = read_value_argument("-1.5e3\u00b12 % kg");
+    REQUIRE(v);
+    CHECK(v->value == -1500.0);
+    CHECK(v->uncertainty == 2.0);
+    CHECK(v->percent);
+    CHECK(v->unit == "kg");
+    const auto fault = [](const char* text) -> std::string {
+      try {
+        (void)read_value_argument(text);
+      } catch (const nondim::tool::value_text_error& e) {
+        return e.what();
+      }
+      return "no error";
+    };
+    CHECK(fault("2x m/s") == "the value '2x' is not a number");
+    CHECK(fault("2+--1 m/s") == "the uncertainty -1 is negative (a standard uncertainty is >= 0)");
+    CHECK(fault("2% m/s").substr(0, 21) == "'%' after the value: ");
+    CHECK(fault("2+-1%% m/s") == "'%' given twice");
+    CHECK(fault("2+-1 +-2 m/s") == "a second uncertainty");
+    CHECK(fault("1e999 m") == "the value '1e999' is out of the range of a double");
+  }
+
   TEST_CASE("every key of the schema is read and the variables keep their order") {
     const auto f = parse_problem_text(
         "title = \"Drag\"\ndependent = \"F\"\nrepeating = [\"rho\", \"U\", \"D\"]\n"

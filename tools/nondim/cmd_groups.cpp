@@ -14,6 +14,7 @@
 #include "commands.hpp"
 #include "messages.hpp"
 #include "problem_input.hpp"
+#include "units_text.hpp"
 
 namespace nondim::tool {
 
@@ -34,7 +35,9 @@ subcommand add_groups(CLI::App& app) {
   CLI::App* sub = app.add_subcommand("groups", "Find the dimensionless groups of a problem (Buckingham pi, exact)");
   sub->add_option("NAME=UNIT", args->variables,
                   "The variables, dependent one first unless --dependent says otherwise: F=N rho=kg/m^3 U=m/s D=m "
-                  "mu=Pa*s");
+                  "mu=Pa*s. 'NAME=VALUE UNIT' gives a value at a design point ('U=2 m/s'), 'NAME=VALUE±U UNIT' "
+                  "or 'NAME=VALUE+-U UNIT' its standard uncertainty ('U=2+-0.05 m/s', 'U=2+-2.5% m/s'); every "
+                  "group whose variables all have values is printed with its value");
   sub->add_option("-f,--file", args->file, "Read the problem from a TOML problem file instead");
   sub->add_option("-r,--repeating", args->repeating,
                   "The repeating variables, comma separated (as many as the rank); default: chosen automatically");
@@ -54,6 +57,7 @@ subcommand add_groups(CLI::App& app) {
       "Options given on the command line override those in the file.\n"
       "Examples:\n"
       "  nondim groups F=N rho=kg/m^3 U=m/s D=m mu=Pa*s\n"
+      "  nondim groups dp=Pa 'rho=998 kg/m^3' 'U=2+-0.05 m/s' 'D=25 mm' 'mu=1.0+-2% mPa*s'\n"
       "  nondim groups --file pod.toml --repeating rho,U,D --format latex\n"
       "  nondim groups --file pod.toml --scales");
   return {
@@ -65,10 +69,19 @@ subcommand add_groups(CLI::App& app) {
         if (!args->repeating.empty()) override_repeating(in, args->repeating);
         if (!args->basis.empty()) in.options.form = args->basis == "named" ? basis::named : basis::classical;
         const analysis a = analyze_input(in);
+        try {
+          (void)group_values(a, in.report.point);  // a value that no group can take (0 where it divides) is bad input
+        } catch (const analysis_error& e) {
+          const file_variable* fv = in.file ? in.file->find(e.variable()) : nullptr;
+          const std::string where = fv != nullptr && fv->value ? in.file->at(fv->value->where)
+                                    : in.file                  ? in.file->path + ": "
+                                                               : std::string();
+          throw input_error(with_prefix(where + std::string(bare_message(e))));
+        }
         if (args->scales && args->format == "latex")
           throw input_error(with_prefix("--scales is available with --format text, markdown or json, not latex"));
         if (args->format == "json") {
-          out << (args->scales ? json_scales_report(a) : json_report(a));
+          out << (args->scales ? json_scales_report(a, in.report) : json_report(a, in.report));
         } else if (args->format == "markdown") {
           out << markdown_report(a, in.report);
           if (args->scales) out << "\n" << scales_markdown_report(a);

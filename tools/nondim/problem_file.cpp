@@ -237,13 +237,26 @@ void read_variable(const checker& c, const toml::table& t, std::size_t index, pr
       v.prototype = c.number_value(node, "'prototype' of " + label);
     } else if (k == "model") {
       v.model = c.number_value(node, "'model' of " + label);
+    } else if (k == "value" || k == "uncertainty") {
+      file_quantity q;
+      q.where = position_of(node.source());
+      if (node.is_string())
+        q.text = c.string_value(node, "'" + k + "' of " + label);
+      else if (node.is_number())
+        q.number = c.number_value(node, "'" + k + "' of " + label);
+      else
+        c.fail(node.source(), "'" + k + "' of " + label + " must be a number or a string (" +
+                                  (k == "value" ? "998 or \"998 kg/m^3\"" : "0.5, \"0.5 K\" or \"2 %\"") + "), not " +
+                                  std::string(type_name(node)));
+      (k == "value" ? v.value : v.uncertainty) = std::move(q);
     } else {
       c.fail(key.source(), "unknown key '" + std::string(k) + "' in " + label +
-                               " (a [[variable]] table takes name, unit, note, prototype, model)");
+                               " (a [[variable]] table takes name, unit, note, value, uncertainty, prototype, model)");
     }
   }
   if (!has_name) c.fail(t.source(), label + " has no 'name'");
   if (!has_unit) c.fail(t.source(), label + " ('" + v.name + "') has no 'unit' (write unit = \"1\" for a pure number)");
+  if (v.uncertainty && !v.value) c.fail(t.source(), label + " ('" + v.name + "') has an 'uncertainty' but no 'value'");
   if (const file_variable* before = out.find(v.name))
     c.fail(t.source(), label + ": the name '" + v.name + "' is already used by the variable at line " +
                            std::to_string(before->where.line));

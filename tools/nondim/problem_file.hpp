@@ -2,7 +2,8 @@
 /// \file problem_file.hpp
 /// \brief Problem files (TOML, schema in DESIGN.md): a title, the optional dependent and
 /// repeating variables, and `[[variable]]` tables in order, each with a name, a unit, an
-/// optional note and optional prototype and model values. Every key outside the schema
+/// optional note, optional value and uncertainty at a design point, and optional prototype
+/// and model values. Every key outside the schema
 /// and every value of the wrong type is an `input_error` naming the key, file and line.
 
 #include <cstddef>
@@ -19,17 +20,27 @@ struct file_position {
   std::size_t column = 0;
 };
 
+/// \brief A `value` or `uncertainty` key: a number in the variable's unit, or a string
+/// ("998 kg/m^3", "0.5 K", "2 %") read by the program against the variable's unit.
+struct file_quantity {
+  std::optional<double> number;  ///< when the key holds a number
+  std::string text;              ///< when it holds a string
+  file_position where;           ///< the value
+};
+
 /// \brief One `[[variable]]` table.
 struct file_variable {
   std::string name;
   std::string unit;
   std::string note;
-  std::optional<double> prototype;  ///< in the variable's own unit
-  std::optional<double> model;      ///< in the variable's own unit; absent = to be found
-  file_position where;              ///< the table
-  file_position unit_where;         ///< the first character of the unit text inside its quotes
-  bool unit_literal = true;         ///< the unit text maps 1:1 onto the file (no escapes), so columns carry over
-  std::string unit_line_text;       ///< the whole line of the file that holds the unit
+  std::optional<double> prototype;           ///< in the variable's own unit
+  std::optional<double> model;               ///< in the variable's own unit; absent = to be found
+  std::optional<file_quantity> value;        ///< the design point
+  std::optional<file_quantity> uncertainty;  ///< standard uncertainty of `value`
+  file_position where;                       ///< the table
+  file_position unit_where;                  ///< the first character of the unit text inside its quotes
+  bool unit_literal = true;    ///< the unit text maps 1:1 onto the file (no escapes), so columns carry over
+  std::string unit_line_text;  ///< the whole line of the file that holds the unit
 };
 
 /// \brief A whole problem file.

@@ -1,12 +1,17 @@
 #include "problem_input.hpp"
 
 #include <algorithm>
+#include <cmath>
+#include <optional>
+#include <string_view>
 #include <utility>
 
+#include <nondim/data.hpp>
 #include <nondim/parse.hpp>
 
 #include "messages.hpp"
 #include "units_text.hpp"
+#include "value_text.hpp"
 
 namespace nondim::tool {
 
@@ -50,6 +55,80 @@ void add_variable(nondim::problem& p, const std::string& name, const std::string
   }
 }
 
+/// A number and unit read from a problem-file string: the unit's factor and offset, or the
+/// variable's when no unit follows.
+struct number_in_unit {
+  double number = 0.0;
+  double factor = 1.0;
+  double offset = 0.0;
+};
+
+number_in_unit file_number(const problem_file& f, const file_quantity& q, const variable& var, const std::string& key) {
+  const std::string where = f.at(q.where) + "'" + key + "' of variable '" + var.name + "': ";
+  if (q.number) return {*q.number, var.factor, var.offset};
+  try {
+    const auto [x, rest] = leading_number(q.text, key == "value" ? "the value" : "the uncertainty");
+    std::string_view unit = rest;
+    while (!unit.empty() && (unit.front() == ' ' || unit.front() == '\t')) unit.remove_prefix(1);
+    while (!unit.empty() && (unit.back() == ' ' || unit.back() == '\t')) unit.remove_suffix(1);
+    if (unit.empty()) return {x, var.factor, var.offset};
+    parsed_unit u;
+    try {
+      u = parse_unit(unit);
+    } catch (const unit_error& e) {
+      throw input_error(with_prefix(where + "unit '" + std::string(unit) + "': " + std::string(bare_message(e))));
+    }
+    if (u.dim != var.dim)
+      throw input_error(with_prefix(where + "'" + q.text + "' has the dimension of " +
+                                    si_unit_string(u.dim, text_form::ascii) + ", but the variable's unit " + var.unit +
+                                    " has that of " + si_unit_string(var.dim, text_form::ascii)));
+    return {x, u.factor, u.offset};
+  } catch (const value_text_error& e) {
+    throw input_error(with_prefix(where + e.what()));
+  }
+}
+
+/// The design-point value of `var` from its `value` and `uncertainty` keys.
+measured_value file_measured(const problem_file& f, const file_variable& fv, const variable& var) {
+  const number_in_unit v = file_number(f, *fv.value, var, "value");
+  measured_value m{v.factor * v.number + v.offset, std::nullopt};
+  if (fv.uncertainty) {
+    const file_quantity& q = *fv.uncertainty;
+    const std::string where = f.at(q.where) + "'uncertainty' of variable '" + var.name + "': ";
+    std::string_view text = q.text;
+    while (!text.empty() && (text.back() == ' ' || text.back() == '\t')) text.remove_suffix(1);
+    if (q.number == std::nullopt && !text.empty() && text.back() == '%') {
+      double percent = 0.0;
+      try {
+        const auto [x, rest] = leading_number(text.substr(0, text.size() - 1), "the per cent");
+        if (rest.find_first_not_of(" \t") != std::string_view::npos)
+          throw value_text_error("'" + q.text + "' is not a per cent (write \"2 %\")");
+        percent = x;
+      } catch (const value_text_error& e) {
+        throw input_error(with_prefix(where + e.what()));
+      }
+      if (v.offset != 0.0)
+        throw input_error(with_prefix(where + "a per cent of a value on a scale with a relative zero (" + var.unit +
+                                      ") means nothing; give the uncertainty in the unit (\"0.5\")"));
+      if (percent < 0.0) throw input_error(with_prefix(where + "'" + q.text + "' is negative"));
+      m.uncertainty = std::abs(v.number) * percent / 100.0 * v.factor;
+    } else {
+      const number_in_unit u = file_number(f, q, var, "uncertainty");
+      if (u.number < 0.0)
+        throw input_error(with_prefix(where + "a standard uncertainty is >= 0, not " +
+                                      (q.number ? round_for_report(*q.number).value_text : q.text)));
+      m.uncertainty = u.number * u.factor;  // a width: the scale's zero does not move it
+    }
+  }
+  try {
+    design_point check;
+    check.set(var.name, m);
+  } catch (const analysis_error& e) {
+    throw input_error(with_prefix(f.at(fv.value->where) + std::string(bare_message(e))));
+  }
+  return m;
+}
+
 std::string trim(std::string_view s) {
   const auto b = s.find_first_not_of(" \t");
   if (b == std::string_view::npos) return {};
@@ -73,7 +152,14 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
       throw input_error(
           with_prefix(where + " is not NAME=UNIT (write, for example, rho=kg/m^3; U=1 for a pure number)"));
     const std::string name = a.substr(0, eq);
-    const std::string unit = a.substr(eq + 1);
+    std::string unit = a.substr(eq + 1);
+    std::optional<value_text> value;
+    try {
+      value = read_value_argument(unit);
+    } catch (const value_text_error& e) {
+      throw input_error(with_prefix(where + ": variable '" + name + "': " + e.what()));
+    }
+    if (value) unit = value->unit;
     if (const auto why = bad_variable_name(name)) throw input_error(with_prefix(where + ": " + *why));
     if (in.problem.index_of(name))
       throw input_error(with_prefix(where + ": the variable '" + name + "' is given twice"));
@@ -86,11 +172,22 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
       (void)parse_unit(unit);
     } catch (const unit_error& e) {
       std::string m = with_prefix(where + ": unit of '" + name + "': " + std::string(bare_message(e)));
-      if (a.size() <= 200) m += "\n" + caret_block(a, code_points(std::string_view(a).substr(0, eq + 1)) + e.column());
+      const std::size_t unit_at = value ? a.rfind(unit) : eq + 1;
+      if (a.size() <= 200 && unit_at != std::string::npos)
+        m += "\n" + caret_block(a, code_points(std::string_view(a).substr(0, unit_at)) + e.column());
       throw input_error(m);
     }
     add_variable(in.problem, name, unit, where + ": ");
     in.report.notes.emplace_back();
+    if (value) {
+      const variable& var = in.problem[in.problem.size() - 1];
+      try {
+        in.report.point.set(var.name, value->percent ? in_si_relative(var, value->value, *value->uncertainty)
+                                                     : in_si(var, value->value, value->uncertainty));
+      } catch (const analysis_error& e) {
+        throw input_error(with_prefix(where + ": " + std::string(bare_message(e))));
+      }
+    }
   }
   return in;
 }
@@ -113,6 +210,10 @@ problem_input problem_from_file(const std::string& path) {
     }
     add_variable(in.problem, v.name, v.unit, line);
     in.report.notes.push_back(v.note);
+    if (v.value) {
+      const variable& var = in.problem[in.problem.size() - 1];
+      in.report.point.set(var.name, file_measured(f, v, var));
+    }
   }
   in.report.title = f.title;
   in.options.dependent = f.dependent;

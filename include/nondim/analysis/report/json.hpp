@@ -16,14 +16,18 @@
 #include "../config.hpp"
 #include "detail/json.hpp"
 #include "latex.hpp"
+#include "options.hpp"
 
 namespace nondim {
 
 /// \brief The analysis as one JSON object:
 /// `{"variables": [{"name", "unit", "dimension"}], "rank", "repeating", "groups": [{"exponents",
 /// "text", "latex", "matches": [{"name", "symbol", "power"}]}], "svd_check": {"rank", "agrees",
-/// "singular_values", "max_residual"}}`, indented, ending in a newline.
-std::string json_report(const analysis& a);
+/// "singular_values", "max_residual"}}`, indented, ending in a newline. A group with a value at
+/// the design point of `o` has `value`, `uncertainty` (when every input has one; both rounded
+/// as rounding.hpp says) and `regimes` (when a named number it is has any: `symbol`,
+/// `number`, `regime`, `bounds`, `configuration`, `source`).
+std::string json_report(const analysis& a, const report_options& o = {});
 
 }  // namespace nondim
 

@@ -8,6 +8,7 @@
 #include <vector>
 #include "../../analysis.hpp"
 #include "detail/json.hpp"
+#include "detail/values.hpp"
 #include "json.hpp"
 #include "latex.hpp"
 
@@ -28,7 +29,7 @@ inline json_value json_dimension(const dimension& d) {
   return m;
 }
 
-inline json_value json_group(const pi_group& g) {
+inline json_value json_group(const pi_group& g, const std::optional<nondim::group_value>& value = std::nullopt) {
   json_members exponents;
   // the non-repeating variable first, then the problem's order: as the text form reads
   const auto put = [&](std::size_t i) {
@@ -42,10 +43,25 @@ inline json_value json_group(const pi_group& g) {
   for (const auto& m : g.matches)
     matches.emplace_back(json_members{
         {"name", std::string(m.name)}, {"symbol", std::string(m.symbol)}, {"power", json_exponent(m.power)}});
-  return json_members{{"exponents", std::move(exponents)},
-                      {"text", g.text(text_form::ascii)},
-                      {"latex", latex(g)},
-                      {"matches", std::move(matches)}};
+  json_members out{{"exponents", std::move(exponents)},
+                   {"text", g.text(text_form::ascii)},
+                   {"latex", latex(g)},
+                   {"matches", std::move(matches)}};
+  if (value) {
+    const rounded_value r = round_for_report(value->value, value->uncertainty);
+    out.emplace_back("value", r.value);
+    if (r.uncertainty) out.emplace_back("uncertainty", *r.uncertainty);
+    json_elements regimes;
+    for (const regime_note& n : regime_notes(g.matches, value->value))
+      regimes.emplace_back(json_members{{"symbol", std::string(n.symbol)},
+                                        {"number", regime_number(n, *value).value},
+                                        {"regime", std::string(n.regime)},
+                                        {"bounds", band_text(n)},
+                                        {"configuration", std::string(n.configuration)},
+                                        {"source", std::string(n.source)}});
+    if (!regimes.empty()) out.emplace_back("regimes", std::move(regimes));
+  }
+  return out;
 }
 
 }  // namespace detail
@@ -53,14 +69,15 @@ inline json_value json_group(const pi_group& g) {
 namespace detail {
 
 /// The members of the `json_report` object, in order.
-inline json_members json_report_members(const analysis& a) {
+inline json_members json_report_members(const analysis& a, const report_options& o = {}) {
   json_elements variables;
   for (const auto& v : a.variables)
     variables.emplace_back(json_members{{"name", v.name}, {"unit", v.unit}, {"dimension", json_dimension(v.dim)}});
   json_elements repeating;
   for (const auto& r : a.repeating) repeating.emplace_back(r);
   json_elements groups;
-  for (const auto& g : a.groups) groups.push_back(json_group(g));
+  const std::vector<std::optional<nondim::group_value>> values = report_values(a, o);
+  for (std::size_t k = 0; k < a.groups.size(); ++k) groups.push_back(json_group(a.groups[k], values[k]));
   json_elements singular;
   for (const double v : a.svd.singular_values) singular.emplace_back(v);
   return json_members{{"variables", std::move(variables)},
@@ -82,8 +99,8 @@ inline std::string json_text(const json_value& root) {
 
 }  // namespace detail
 
-NONDIM_ANALYSIS_INLINE std::string json_report(const analysis& a) {
-  return detail::json_text(detail::json_report_members(a));
+NONDIM_ANALYSIS_INLINE std::string json_report(const analysis& a, const report_options& o) {
+  return detail::json_text(detail::json_report_members(a, o));
 }
 
 }  // namespace nondim

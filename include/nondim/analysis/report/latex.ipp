@@ -9,6 +9,7 @@
 #include <string_view>
 #include "../../analysis.hpp"
 #include "detail/names.hpp"
+#include "detail/values.hpp"
 #include "latex.hpp"
 #include "options.hpp"
 
@@ -93,6 +94,17 @@ NONDIM_ANALYSIS_INLINE std::string latex_name(std::string_view name) {
   return s;
 }
 
+namespace detail {
+
+/// "1.5e-7" -> "1.5 \\times 10^{-7}"; "-2300" -> "-2300" (a minus sign in math mode).
+inline std::string latex_number(const std::string& text) {
+  const auto e = text.find('e');
+  if (e == std::string::npos) return text;
+  return text.substr(0, e) + " \\times 10^{" + text.substr(e + 1) + "}";
+}
+
+}  // namespace detail
+
 NONDIM_ANALYSIS_INLINE std::string latex(const pi_group& g) {
   std::string num;
   std::string den;
@@ -115,12 +127,19 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
   if (!o.title.empty()) s += "% " + detail::one_line(o.title) + "\n";
   s += "% dimensionless groups of " + std::to_string(a.variables.size()) + " variables, rank " +
        std::to_string(a.rank) + "; repeating: " + detail::comma_list(a.repeating) + "\n";
+  const std::vector<std::optional<group_value>> values = detail::report_values(a, o);
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     s += "\\[ \\Pi_{" + std::to_string(k + 1) + "} = " + latex(a.groups[k]);
     // Only the best match goes into the equation: two entries that share a form (Nu and
     // Bi) are not equal to each other, so chaining them would state a falsehood.
     const auto& names = a.groups[k].matches;
     if (!names.empty()) s += " = " + detail::latex_power(detail::latex_symbol(names[0].symbol), names[0].power);
+    if (values[k]) {
+      const rounded_value r = round_for_report(values[k]->value, values[k]->uncertainty);
+      s += " = " + detail::latex_number(r.value_text);
+      if (values[k]->uncertainty)
+        s += ", \\quad u(\\Pi_{" + std::to_string(k + 1) + "}) = " + detail::latex_number(r.uncertainty_text);
+    }
     s += " \\]";
     if (!names.empty()) {
       s += "  % " + detail::one_line(names[0].name);
@@ -133,6 +152,7 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
   for (std::size_t k = 0; k < a.isolated.size(); ++k)
     s += "% excluded: " + a.isolated[k] + " (" +
          detail::one_line(k < a.isolated_reasons.size() ? a.isolated_reasons[k] : "") + ")\n";
+  for (const auto& note : detail::regime_sentences(a, values)) s += "% note: " + detail::one_line(note) + "\n";
   return s;
 }
 

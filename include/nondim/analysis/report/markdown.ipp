@@ -11,6 +11,7 @@
 #include "../extraction/explain.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"
+#include "detail/values.hpp"
 #include "markdown.hpp"
 #include "options.hpp"
 #include "text.hpp"
@@ -78,14 +79,35 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
   if (a.deficiency.deficient)
     s += detail::markdown_escape(detail::explain_deficiency(a.rank, a.deficiency, form)) + "\n\n";
 
-  s += detail::markdown_row({"group", "expression", "recognised as"}) + detail::markdown_row({":--", ":--", ":--"});
+  const std::vector<std::optional<group_value>> values = detail::report_values(a, o);
+  bool any_value = false;
+  bool any_uncertainty = false;
+  for (const auto& v : values) {
+    any_value = any_value || v.has_value();
+    any_uncertainty = any_uncertainty || (v && v->uncertainty);
+  }
+  std::vector<std::string> group_head{"group", "expression", "recognised as"};
+  std::vector<std::string> group_rule{":--", ":--", ":--"};
+  if (any_value) {
+    group_head.emplace_back("value");
+    group_rule.emplace_back("--:");
+  }
+  if (any_uncertainty) {
+    group_head.emplace_back("standard uncertainty");
+    group_rule.emplace_back("--:");
+  }
+  s += detail::markdown_row(group_head) + detail::markdown_row(group_rule);
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     std::string names;
     for (const auto& m : a.groups[k].matches)
       names +=
           detail::cat(names.empty() ? "" : "; ", m.symbol, detail::exponent_suffix(m.power, form), " (", m.name, ")");
-    s += detail::markdown_row({"\u03a0" + std::to_string(k + 1), detail::markdown_escape(a.groups[k].text(form)),
-                               names.empty() ? "–" : detail::markdown_escape(names)});
+    std::vector<std::string> row{"\u03a0" + std::to_string(k + 1), detail::markdown_escape(a.groups[k].text(form)),
+                                 names.empty() ? "–" : detail::markdown_escape(names)};
+    const rounded_value r = values[k] ? round_for_report(values[k]->value, values[k]->uncertainty) : rounded_value{};
+    if (any_value) row.push_back(values[k] ? r.value_text : "–");
+    if (any_uncertainty) row.push_back(values[k] && values[k]->uncertainty ? r.uncertainty_text : "–");
+    s += detail::markdown_row(row);
   }
   s += "\n";
 
@@ -101,6 +123,8 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
   s += detail::markdown_escape(detail::svd_line(a.svd)) + "\n";
   for (const auto& note : a.notes)
     if (note != a.deficiency.explanation) s += "\n> **Note:** " + detail::markdown_escape(note) + "\n";
+  for (const auto& note : detail::regime_sentences(a, values, form))
+    s += "\n> **Note:** " + detail::markdown_escape(note) + "\n";
   return s;
 }
 

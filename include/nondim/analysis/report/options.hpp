@@ -1,9 +1,12 @@
 #pragma once
 /// \file options.hpp
-/// \brief What a report may be told besides the analysis: a title and a note per variable.
+/// \brief What a report may be told besides the analysis: a title, a note per variable and
+/// the values of a design point.
 
 #include <string>
 #include <vector>
+
+#include "../data/design_point.hpp"
 
 namespace nondim {
 
@@ -11,6 +14,10 @@ namespace nondim {
 struct report_options {
   std::string title;               ///< a heading; empty for none
   std::vector<std::string> notes;  ///< aligned with the analysis' variables ("drag", "free-stream speed"); may be empty
+  /// Values of the variables (SI): every group whose variables all have one is reported
+  /// with its value, its standard uncertainty when they all have one too, and the regimes
+  /// of the named numbers it is (regimes.hpp).
+  design_point point{};
 };
 
 }  // namespace nondim

@@ -51,7 +51,7 @@ std::string scales_markdown_report(const analysis& a);
 /// exponents on the repeating variables, only the non-zero ones); for a variable outside
 /// their span `nondimensional`, `scale` and `exponents` are null and `"lacking"` names a base
 /// dimension they lack. Without `--scales` the program prints `json_report` unchanged.
-std::string json_scales_report(const analysis& a);
+std::string json_scales_report(const analysis& a, const report_options& o = {});
 
 }  // namespace nondim
 

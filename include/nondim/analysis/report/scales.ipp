@@ -75,7 +75,7 @@ NONDIM_ANALYSIS_INLINE std::string scales_markdown_report(const analysis& a) {
   return s;
 }
 
-NONDIM_ANALYSIS_INLINE std::string json_scales_report(const analysis& a) {
+NONDIM_ANALYSIS_INLINE std::string json_scales_report(const analysis& a, const report_options& o) {
   using detail::json_elements;
   using detail::json_members;
   using detail::json_value;
@@ -99,7 +99,7 @@ NONDIM_ANALYSIS_INLINE std::string json_scales_report(const analysis& a) {
     }
     scales.emplace_back(std::move(m));
   }
-  json_members root = detail::json_report_members(a);
+  json_members root = detail::json_report_members(a, o);
   root.emplace_back("scales", std::move(scales));
   return detail::json_text(root);
 }

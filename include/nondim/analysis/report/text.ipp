@@ -9,6 +9,7 @@
 #include "../extraction/explain.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"
+#include "detail/values.hpp"
 #include "options.hpp"
 #include "text.hpp"
 
@@ -48,10 +49,14 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
   s += "repeating " + detail::comma_list(a.repeating, form) +
        (a.repeating_given ? " (given)\n" : " (chosen automatically)\n");
 
+  const std::vector<std::optional<group_value>> values = detail::report_values(a, o);
   s += "groups (" + std::to_string(a.groups.size()) + ")\n";
-  for (std::size_t k = 0; k < a.groups.size(); ++k)
-    s += std::string("  ") + (uni ? "\u03a0" : "Pi") + std::to_string(k + 1) + " = " + a.groups[k].text(form) +
-         detail::names_suffix(a.groups[k], form) + "\n";
+  for (std::size_t k = 0; k < a.groups.size(); ++k) {
+    const std::string label = (uni ? "\u03a0" : "Pi") + std::to_string(k + 1);
+    s += "  " + label + " = " + a.groups[k].text(form) + detail::names_suffix(a.groups[k], form) + "\n";
+    if (values[k])
+      s += "  " + std::string(label.size() - (uni ? 1 : 0), ' ') + "   " + detail::value_sentence(*values[k]) + "\n";
+  }
 
   if (a.isolated.empty()) {
     s += "excluded: none\n";
@@ -64,6 +69,7 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
   s += detail::svd_line(a.svd) + "\n";
   for (const auto& note : a.notes)
     if (note != a.deficiency.explanation) s += "note: " + note + "\n";
+  for (const auto& note : detail::regime_sentences(a, values, form)) s += "note: " + note + "\n";
   return s;
 }
 
