@@ -357,7 +357,9 @@ TEST_SUITE("parse_unit") {
   }
 
   TEST_CASE("parentheses may nest to the documented limit") {
-    std::string deep = std::string(max_unit_nesting, '(') + "m" + std::string(max_unit_nesting, ')');
+    std::string deep(max_unit_nesting, '(');
+    deep += 'm';
+    deep.append(max_unit_nesting, ')');
     CHECK(parse_unit(deep).dim == dims::length);
   }
 
