@@ -5,12 +5,14 @@
 // library with boost::multiprecision::cpp_rational: the rank is the exact rank of the
 // dimension matrix, there are n - rank groups, every group is exactly dimensionless, has
 // integer exponents with gcd 1 and, in the classical basis, exactly one non-repeating
-// variable with a positive exponent. analysis_error is the only exception allowed.
+// variable with a positive exponent. analysis_error is the only exception allowed (README.md
+// "Error model"), from problem::add and analyze(); the reports of the result throw nothing.
 #include <algorithm>
 #include <array>
 #include <cstddef>
 #include <cstdint>
 #include <cstring>
+#include <exception>
 #include <limits>
 #include <numeric>
 #include <string>
@@ -18,6 +20,7 @@
 
 #include <boost/multiprecision/cpp_int.hpp>
 #include <nondim/analysis.hpp>
+#include <nondim/report.hpp>
 
 #include "fuzz_invariants.hpp"
 
@@ -117,6 +120,11 @@ void check(const nondim::problem& p, const nondim::options& o, const nondim::ana
     }
   }
   require(!nondim::to_string(a).empty());
+  // every report of the analysis: they throw nothing, whatever the exponents
+  require(!nondim::text_report(a).empty() && !nondim::markdown_report(a).empty());
+  require(!nondim::latex_report(a).empty() && !nondim::json_report(a).empty());
+  require(!nondim::scales_text_report(a).empty() && !nondim::json_scales_report(a).empty());
+  for (const auto& v : p.variables()) require(!v.unit.empty());
 }
 
 }  // namespace
@@ -145,7 +153,11 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   for (std::size_t j = 0; j < n; ++j) {
     std::array<nondim::rational, nondim::base_dimension_count> e{};
     for (auto& x : e) x = next_exponent(r);
-    p.add("v" + std::to_string(j), nondim::dimension{e});
+    try {  // README: problem::add throws analysis_error only, whatever the exponents
+      p.add("v" + std::to_string(j), nondim::dimension{e});
+    } catch (const std::exception& x) {
+      nondim_fuzz::undocumented(x);
+    }
   }
   if ((flags & 16U) != 0) o.dependent = "v" + std::to_string(dependent % n);
   if (given) {                                  // a subset of the variables, possibly a bad one
@@ -160,6 +172,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     check(p, o, a);
   } catch (const nondim::analysis_error& e) {
     require(std::string(e.what()).rfind("nondim: ", 0) == 0);
+  } catch (const std::exception& e) {  // README: analyze and the reports throw nothing else
+    nondim_fuzz::undocumented(e);
   }
   return 0;
 }
