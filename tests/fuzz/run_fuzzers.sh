@@ -72,8 +72,10 @@ for name in "${targets[@]}"; do
   fi
   if [ $merge -eq 1 ]; then
     before=$(ls "$seeds" | wc -l)
-    # -merge=1: inputs of the run's corpus that add coverage to the seeds, minimised
-    "$fuzzer" -merge=1 -max_len=512 -timeout=10 -rss_limit_mb=2048 "$seeds" "$work/corpus" 2>"$work/merge.log" ||
+    # -merge=1: inputs of the run's corpus that add coverage to the seeds, minimised;
+    # -use_counters=0 counts edges only, not how often each runs (else hundreds of inputs)
+    "$fuzzer" -merge=1 -use_counters=0 -max_len=512 -timeout=10 -rss_limit_mb=2048 "$seeds" "$work/corpus" \
+      2>"$work/merge.log" ||
       { tail -n 20 "$work/merge.log"; status=1; }
     echo "   merged: $(( $(ls "$seeds" | wc -l) - before )) new inputs into $seeds"
   fi
