@@ -15,6 +15,7 @@
 #include <exception>
 #include <limits>
 #include <numeric>
+#include <span>
 #include <string>
 #include <vector>
 
@@ -64,6 +65,27 @@ nondim::rational next_exponent(reader& r) {
   if (den == std::numeric_limits<std::int64_t>::min() || num == std::numeric_limits<std::int64_t>::min())
     return nondim::rational{num == std::numeric_limits<std::int64_t>::min() ? 0 : num};
   return nondim::rational{num, den};
+}
+
+// A value for a group: the IEEE 754 specials and extremes, or any bit pattern.
+double next_value(reader& r) {
+  static constexpr double specials[] = {0.0,
+                                        -0.0,
+                                        1.0,
+                                        -1.0,
+                                        std::numeric_limits<double>::quiet_NaN(),
+                                        std::numeric_limits<double>::infinity(),
+                                        -std::numeric_limits<double>::infinity(),
+                                        std::numeric_limits<double>::max(),
+                                        std::numeric_limits<double>::min(),
+                                        std::numeric_limits<double>::denorm_min()};
+  const std::uint8_t b = r.byte();
+  if (b < 128) return specials[b % std::size(specials)];
+  if (b < 192) return static_cast<double>(b - 160);
+  const std::int64_t bits = r.int64();
+  double d = 0;
+  std::memcpy(&d, &bits, sizeof d);
+  return d;
 }
 
 big to_big(const nondim::rational& q) {
@@ -170,6 +192,27 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   try {
     const nondim::analysis a = nondim::analyze(p, o);
     check(p, o, a);
+    // group values from the rest of the bytes: analysis_error only, for any value
+    std::vector<double> si(n);
+    for (double& x : si) x = next_value(r);
+    try {
+      const std::vector<double> v = a.values(si);
+      require(v.size() == a.groups.size());
+    } catch (const nondim::analysis_error& e) {
+      require(std::string(e.what()).rfind("nondim: ", 0) == 0);
+    }
+    if (!a.groups.empty()) {
+      const std::vector<std::span<const double>> columns(n, std::span<const double>(si));
+      std::vector<double> out(n);
+      try {
+        a.groups.front().evaluate(columns, out);
+      } catch (const nondim::analysis_error& e) {
+        require(std::string(e.what()).rfind("nondim: ", 0) == 0);
+      }
+    }
+    // the elimination alone agrees with the analysis on the rank
+    const nondim::null_space_basis b = nondim::exact_null_space(p.matrix(), o.arithmetic);
+    require(b.rank == a.rank && b.vectors.size() == n - b.rank);
   } catch (const nondim::analysis_error& e) {
     require(std::string(e.what()).rfind("nondim: ", 0) == 0);
   } catch (const std::exception& e) {  // README: analyze and the reports throw nothing else
