@@ -5,19 +5,23 @@
 // library with boost::multiprecision::cpp_rational: the rank is the exact rank of the
 // dimension matrix, there are n - rank groups, every group is exactly dimensionless, has
 // integer exponents with gcd 1 and, in the classical basis, exactly one non-repeating
-// variable with a positive exponent. analysis_error is the only exception allowed.
+// variable with a positive exponent. analysis_error is the only exception allowed (README.md
+// "Error model"), from problem::add and analyze(); the reports of the result throw nothing.
 #include <algorithm>
 #include <array>
 #include <cstddef>
 #include <cstdint>
 #include <cstring>
+#include <exception>
 #include <limits>
 #include <numeric>
+#include <span>
 #include <string>
 #include <vector>
 
 #include <boost/multiprecision/cpp_int.hpp>
 #include <nondim/analysis.hpp>
+#include <nondim/report.hpp>
 
 #include "fuzz_invariants.hpp"
 
@@ -61,6 +65,27 @@ nondim::rational next_exponent(reader& r) {
   if (den == std::numeric_limits<std::int64_t>::min() || num == std::numeric_limits<std::int64_t>::min())
     return nondim::rational{num == std::numeric_limits<std::int64_t>::min() ? 0 : num};
   return nondim::rational{num, den};
+}
+
+// A value for a group: the IEEE 754 specials and extremes, or any bit pattern.
+double next_value(reader& r) {
+  static constexpr double specials[] = {0.0,
+                                        -0.0,
+                                        1.0,
+                                        -1.0,
+                                        std::numeric_limits<double>::quiet_NaN(),
+                                        std::numeric_limits<double>::infinity(),
+                                        -std::numeric_limits<double>::infinity(),
+                                        std::numeric_limits<double>::max(),
+                                        std::numeric_limits<double>::min(),
+                                        std::numeric_limits<double>::denorm_min()};
+  const std::uint8_t b = r.byte();
+  if (b < 128) return specials[b % std::size(specials)];
+  if (b < 192) return static_cast<double>(b - 160);
+  const std::int64_t bits = r.int64();
+  double d = 0;
+  std::memcpy(&d, &bits, sizeof d);
+  return d;
 }
 
 big to_big(const nondim::rational& q) {
@@ -117,6 +142,11 @@ void check(const nondim::problem& p, const nondim::options& o, const nondim::ana
     }
   }
   require(!nondim::to_string(a).empty());
+  // every report of the analysis: they throw nothing, whatever the exponents
+  require(!nondim::text_report(a).empty() && !nondim::markdown_report(a).empty());
+  require(!nondim::latex_report(a).empty() && !nondim::json_report(a).empty());
+  require(!nondim::scales_text_report(a).empty() && !nondim::json_scales_report(a).empty());
+  for (const auto& v : p.variables()) require(!v.unit.empty());
 }
 
 }  // namespace
@@ -145,7 +175,11 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   for (std::size_t j = 0; j < n; ++j) {
     std::array<nondim::rational, nondim::base_dimension_count> e{};
     for (auto& x : e) x = next_exponent(r);
-    p.add("v" + std::to_string(j), nondim::dimension{e});
+    try {  // README: problem::add throws analysis_error only, whatever the exponents
+      p.add("v" + std::to_string(j), nondim::dimension{e});
+    } catch (const std::exception& x) {
+      nondim_fuzz::undocumented(x);
+    }
   }
   if ((flags & 16U) != 0) o.dependent = "v" + std::to_string(dependent % n);
   if (given) {                                  // a subset of the variables, possibly a bad one
@@ -158,8 +192,31 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   try {
     const nondim::analysis a = nondim::analyze(p, o);
     check(p, o, a);
+    // group values from the rest of the bytes: analysis_error only, for any value
+    std::vector<double> si(n);
+    for (double& x : si) x = next_value(r);
+    try {
+      const std::vector<double> v = a.values(si);
+      require(v.size() == a.groups.size());
+    } catch (const nondim::analysis_error& e) {
+      require(std::string(e.what()).rfind("nondim: ", 0) == 0);
+    }
+    if (!a.groups.empty()) {
+      const std::vector<std::span<const double>> columns(n, std::span<const double>(si));
+      std::vector<double> out(n);
+      try {
+        a.groups.front().evaluate(columns, out);
+      } catch (const nondim::analysis_error& e) {
+        require(std::string(e.what()).rfind("nondim: ", 0) == 0);
+      }
+    }
+    // the elimination alone agrees with the analysis on the rank
+    const nondim::null_space_basis b = nondim::exact_null_space(p.matrix(), o.arithmetic);
+    require(b.rank == a.rank && b.vectors.size() == n - b.rank);
   } catch (const nondim::analysis_error& e) {
     require(std::string(e.what()).rfind("nondim: ", 0) == 0);
+  } catch (const std::exception& e) {  // README: analyze and the reports throw nothing else
+    nondim_fuzz::undocumented(e);
   }
   return 0;
 }

@@ -1,5 +1,6 @@
 #include "problem_file.hpp"
 
+#include <cctype>
 #include <cerrno>
 #include <cmath>
 #include <cstdio>
@@ -52,34 +53,48 @@ std::string_view type_name(const toml::node& n) {
   return "nothing";
 }
 
-/// The code point of UTF-8 `s` at byte `i` (U+FFFD for a bad sequence) and its length.
+/// The code point of UTF-8 `s` at byte `i` and its length; U+FFFD and length 1 for a
+/// sequence that is not well-formed UTF-8 (truncated, overlong, a surrogate, past U+10FFFF),
+/// whose bytes are then left for the reader to refuse.
 std::pair<char32_t, std::size_t> code_point_at(std::string_view s, std::size_t i) {
   const auto b = static_cast<unsigned char>(s[i]);
-  const std::size_t len = b >= 0xF0U ? 4 : b >= 0xE0U ? 3 : b >= 0xC0U ? 2 : 1;
-  if (len == 1 || i + len > s.size()) return {0xFFFD, 1};
+  const std::size_t len = b >= 0xF8U ? 0 : b >= 0xF0U ? 4 : b >= 0xE0U ? 3 : b >= 0xC0U ? 2 : 1;
+  if (len <= 1 || i + len > s.size()) return {0xFFFD, 1};
   char32_t c = b & (0x7FU >> len);
   for (std::size_t k = 1; k < len; ++k) {
     const auto t = static_cast<unsigned char>(s[i + k]);
     if ((t & 0xC0U) != 0x80U) return {0xFFFD, 1};
     c = (c << 6U) | (t & 0x3FU);
   }
+  constexpr char32_t shortest[5] = {0, 0, 0x80, 0x800, 0x10000};  // least code point of each length
+  if (c < shortest[len] || c > 0x10FFFF || (c >= 0xD800 && c <= 0xDFFF)) return {0xFFFD, 1};
   return {c, len};
 }
 
-/// Code points that toml++ 3.3 classifies with undefined behaviour when it asks whether
-/// they are white space: its generated table splits U+00A0.. into blocks of 1018 code
-/// points, and blocks 0, 11 and 63 (U+00A0..U+0499, U+2C5E..U+3057, U+FB26..U+FEFF) fall
-/// through to an unreachable branch for every code point but the white space among them
-/// (U+00A0, U+3000). Latin-1 letters and signs, Greek, Cyrillic, CJK radicals and more,
-/// common in notes and units. The ranges below hold those blocks with a margin (moving a
-/// code point that needs no moving is harmless: it comes back unchanged in every string).
-bool toml_reader_defect(char32_t c) {
-  return (c > 0xA0 && c < 0x49A) || (c >= 0x2C5E && c < 0x3368 && c != 0x3000) || (c >= 0xFB06 && c < 0xFEFF);
+/// toml++ 3.3 classifies code points of the Basic Multilingual Plane with undefined
+/// behaviour when it asks whether they are white space: its generated table reaches an
+/// unreachable branch for most code points of three of its blocks (U+00A1..U+0499,
+/// U+2C5E..U+3057, U+FB26..U+FEFE). Rather than keep a list of the faulty ones, which only
+/// that version's table defines, every non-ASCII code point of the BMP reaches the reader
+/// as a stand-in in the private-use plane 15 (U+F0000 plus the code point, four bytes of
+/// UTF-8), which every classifier of the reader answers without a table: its white-space
+/// table ends at U+FEFF, and the bare-key table (off in TOML 1.0) at U+EFFFF. The mapping
+/// is one code point for one, so lines and columns of the reader's positions are those of
+/// the file; code points past the BMP reach the reader unchanged (past its tables too).
+/// TOML 1.0 gives no meaning to a non-ASCII code point outside strings and comments, so the
+/// stand-ins change no valid file, and only the reader's own non-standard white space
+/// (U+00A0, U+2028, U+3000...) is refused as any other stray character.
+constexpr char32_t stand_in_base = 0xF0000;
+constexpr char32_t stand_in_first = stand_in_base + 0x80;
+constexpr char32_t stand_in_last = stand_in_base + 0xFFFF;
+
+bool has_stand_in(char32_t c) {
+  return c >= 0x80 && c <= 0xFFFF;
 }
 
-/// Such code points reach the reader moved into the private-use plane 15 (U+F0000 plus the
-/// code point), which it classifies safely, and are moved back in every string read.
-constexpr char32_t stand_in_base = 0xF0000;
+bool is_stand_in(char32_t c) {
+  return c >= stand_in_first && c <= stand_in_last;
+}
 
 void append_utf8(std::string& out, char32_t c) {
   const auto byte = [&](char32_t b) { out.push_back(static_cast<char>(static_cast<unsigned char>(b))); };
@@ -105,7 +120,7 @@ void append_utf8(std::string& out, char32_t c) {
 template <class From, class To>
 std::string moved(std::string_view text, From from, To to) {
   std::string out;
-  out.reserve(text.size());
+  out.reserve(text.size() + text.size() / 2);
   for (std::size_t i = 0; i < text.size();) {
     const auto [c, len] = code_point_at(text, i);
     if (len > 1 && from(c)) {
@@ -118,17 +133,28 @@ std::string moved(std::string_view text, From from, To to) {
   return out;
 }
 
+constexpr std::string_view byte_order_mark = "\xEF\xBB\xBF";
+
+/// The text the reader sees: every non-ASCII BMP code point as its stand-in, but a byte
+/// order mark that starts the file, which the reader itself skips.
 std::string to_reader(std::string_view text) {
-  return moved(text, toml_reader_defect, [](char32_t c) { return stand_in_base + c; });
+  const std::size_t keep = text.substr(0, 3) == byte_order_mark ? 3 : 0;
+  return std::string(text.substr(0, keep)) +
+         moved(text.substr(keep), has_stand_in, [](char32_t c) { return stand_in_base + c; });
 }
 
+/// Text from the reader (a key, a string, a message) with the stand-ins moved back. The
+/// reader's messages write a code point past U+007F as an escape, `\U000Fhhhh` for a
+/// stand-in: that becomes `\uhhhh`, the escape of the code point of the file.
 std::string from_reader(std::string_view text) {
-  return moved(
-      text,
-      [](char32_t c) {
-        return c >= stand_in_base && c < stand_in_base + 0x10000 && toml_reader_defect(c - stand_in_base);
-      },
-      [](char32_t c) { return c - stand_in_base; });
+  std::string out = moved(text, is_stand_in, [](char32_t c) { return c - stand_in_base; });
+  const auto hex = [](char h) { return std::isxdigit(static_cast<unsigned char>(h)) != 0; };
+  for (std::size_t at = out.find("\\U000F"); at != std::string::npos; at = out.find("\\U000F", at + 1)) {
+    // `\U000F` and four hex digits: the last four are those of the BMP code point
+    if (at + 10 <= out.size() && hex(out[at + 6]) && hex(out[at + 7]) && hex(out[at + 8]) && hex(out[at + 9]))
+      out.replace(at, 6, "\\u");
+  }
+  return out;
 }
 
 struct text_fault {

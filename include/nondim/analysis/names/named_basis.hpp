@@ -74,7 +74,8 @@ struct named_group {
 ///          dependent variable, when it occurs in the span, appears in the first group only.
 /// \throws std::invalid_argument when a group's length differs from the number of
 ///         variables, a group is not dimensionless, the groups are not independent, or an
-///         index is out of range.
+///         index is out of range; rational_overflow when an exponent of a named group
+///         does not fit in 64 bits (`analyze()` then keeps the classical groups).
 [[nodiscard]] std::vector<named_group> named_basis(std::span<const group_variable> variables,
                                                    std::span<const std::vector<std::int64_t>> classical,
                                                    std::size_t dependent = named_group::npos,

@@ -324,10 +324,19 @@ NONDIM_ANALYSIS_INLINE std::vector<named_group> named_basis(std::span<const grou
     if (g.size() != n)
       throw std::invalid_argument("nondim: named basis: group " + std::to_string(k + 1) + " has " +
                                   std::to_string(g.size()) + " exponents for " + std::to_string(n) + " variables");
-    dimension d{};
-    for (std::size_t i = 0; i < n; ++i)
-      if (g[i] != 0) d = d * pow(variables[i].dim, rational{g[i]});
-    if (!d.is_dimensionless())
+    // exactly, in cpp_rational: the product of 64-bit exponents and dimensions can pass 64
+    // bits for a group that is dimensionless all the same
+    bool dimensionless = true;
+    for (std::size_t b = 0; b < base_dimension_count && dimensionless; ++b) {
+      boost::multiprecision::cpp_rational sum = 0;
+      for (std::size_t i = 0; i < n; ++i) {
+        const rational e = variables[i].dim[b];
+        if (g[i] != 0 && !e.is_zero())
+          sum += boost::multiprecision::cpp_rational(g[i]) * boost::multiprecision::cpp_rational(e.num, e.den);
+      }
+      dimensionless = sum == 0;
+    }
+    if (!dimensionless)
       throw std::invalid_argument("nondim: named basis: group " + std::to_string(k + 1) + " is not dimensionless");
   }
 

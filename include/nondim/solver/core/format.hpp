@@ -73,6 +73,22 @@ inline std::string exponent_suffix(const rational& e, text_form form) {
   return s;
 }
 
+/// Exponent suffix of |e| (ASCII), for a factor written under the solidus. Works on the
+/// magnitude in uint64: |-2^63| is not an int64, so `-e` would overflow for that exponent.
+inline std::string magnitude_suffix(const rational& e) {
+  const std::uint64_t m = e.num < 0 ? 0 - static_cast<std::uint64_t>(e.num) : static_cast<std::uint64_t>(e.num);
+  std::string s;
+  if (m == 1 && e.den == 1) return s;
+  s.append(e.den == 1 ? "^" : "^(");
+  s += std::to_string(m);
+  if (e.den != 1) {
+    s.push_back('/');
+    s += std::to_string(e.den);
+    s.push_back(')');
+  }
+  return s;
+}
+
 }  // namespace detail
 
 /// \brief The symbol of base dimension `i` ("L" ... "J"; Θ is "Theta" in ASCII).
@@ -96,7 +112,10 @@ inline std::string to_string(const dimension& d, text_form form = text_form::asc
 ///
 /// Unicode: "kg·m⁻¹·s⁻¹" (a product of powers). ASCII: "kg/(m*s)" (one solidus, the
 /// denominator bracketed when it has more than one factor, as SI Brochure 9th ed. 5.4.6
-/// asks). Dimensionless: "1". Both forms parse back with `parse_unit`.
+/// asks). Dimensionless: "1". Never throws past allocation: every exponent a `rational`
+/// holds is written, -2^63 included. Both forms parse back with `parse_unit` as long as
+/// every exponent lies within the parser's ±(2^63 - 1) (an exponent of -2^63 is past
+/// that limit and reads as `unit_error`, kind `exponent_overflow`).
 inline std::string si_unit_string(const dimension& d, text_form form = text_form::unicode) {
   if (d.is_dimensionless()) return "1";
   if (form == text_form::unicode) {
@@ -118,7 +137,7 @@ inline std::string si_unit_string(const dimension& d, text_form form = text_form
     std::string& side = e.num > 0 ? num : den;
     if (!side.empty()) side += '*';
     side += detail::base_unit_symbols[i];
-    side += detail::exponent_suffix(e.num > 0 ? e : -e, form);
+    side += detail::magnitude_suffix(e);
     if (e.num < 0) ++den_count;
   }
   if (den.empty()) return num;
