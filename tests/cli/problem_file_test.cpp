@@ -231,11 +231,21 @@ TEST_SUITE("problem file") {
           "nondim: p.toml:1: unknown key 'k" + ch +
               "' (a problem file takes title, dependent, repeating and [[variable]] tables)")
         ++key_errors;
-      const auto f = parse_problem_text("title = \"" + ch + "\" # " + ch + "\n[[variable]]\nname = '" + ch +
-                                            "'\nunit = \"m\"\nnote = \"\"\"" + ch + "\"\"\"\n",
+      const auto f = parse_problem_text("title = \"" + ch + "\" # " + ch +
+                                            "\n[[variable]]\nname = 'x'\nunit = \"m\"\nnote = \"\"\"" + ch + "\"\"\"\n",
                                         "p.toml");
-      if (f.title != ch || f.variables[0].name != ch || f.variables[0].note != ch)
+      if (f.title != ch || f.variables[0].note != ch)
         FAIL_CHECK("code point ", static_cast<unsigned>(c), " changed in a string");
+      // in a name: kept as written, or refused by the program's own rule for names (an
+      // invisible or operator character), never mangled by the reader
+      const std::string name_file = "[[variable]]\nname = 'v" + ch + "'\nunit = \"m\"\n";
+      const std::string refused = message_of(name_file);
+      if (refused == "no error") {
+        if (parse_problem_text(name_file, "p.toml").variables[0].name != "v" + ch)
+          FAIL_CHECK("code point ", static_cast<unsigned>(c), " changed in a name");
+      } else if (refused.find("nondim: p.toml:2: ") != 0 || refused.find("the variable name") == std::string::npos) {
+        FAIL_CHECK("code point ", static_cast<unsigned>(c), " in a name: ", refused);
+      }
     }
     constexpr std::size_t walked = 0xFFFF - 0x80 + 1 - 0x800;  // non-ASCII BMP code points, no surrogates
     CHECK(bare_errors == walked);                              // every one refused with its line
