@@ -6,6 +6,7 @@
 // infinities (IEEE 754), and problems at the variable limit.
 #include <doctest/doctest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <cstdint>
 #include <limits>
@@ -468,6 +469,64 @@ TEST_SUITE("exception contracts") {
         expect_only<analysis_error>("exact_null_space", [&] { (void)exact_null_space(m, a); });
       expect_only<std::out_of_range>("matrix()", [&] { (void)m(base_dimension_count, 0); });
       expect_only<std::out_of_range>("column()", [&] { (void)m.column(4); });
+    }
+  }
+
+  TEST_CASE("design point and its group values: analysis_error only, for every extreme value and uncertainty") {
+    problem p = sphere_drag();
+    p.add("T", "degC");
+    const analysis a = analyze(p);
+    for (const double x : extreme_doubles())
+      for (const double u : extreme_doubles()) {
+        for (std::size_t i = 0; i < p.size(); ++i) {
+          expect_only<analysis_error>("in_si", [&] { (void)in_si(p[i], x, u); });
+          expect_only<analysis_error>("in_si_relative", [&] { (void)in_si_relative(p[i], x, u); });
+        }
+        design_point point;
+        expect_only<analysis_error>("design_point::set", [&] { point.set("F", measured_value{x, u}); });
+        expect_only<analysis_error>("design_point::set(problem)", [&] { point.set(p, "rho", x, u); });
+        expect_only<analysis_error>("design_point::set_relative", [&] { point.set_relative(p, "U", x, u); });
+        expect_only<analysis_error>("design_point::set unknown", [&] { point.set(p, "nope", x, u); });
+        expect_only<analysis_error>("design_point::set empty", [&] { point.set("", measured_value{x, u}); });
+        for (const auto& g : a.groups)
+          expect_only<analysis_error>("evaluate(point)", [&] { (void)evaluate(g, point); });
+        expect_only<analysis_error>("group_values", [&] { (void)group_values(a, point); });
+        const std::vector<double> xs{x, u, 1.0};
+        const std::vector<double> short_span{x};
+        expect_only<analysis_error>("product_uncertainty", [&] { (void)product_uncertainty(xs, xs, xs); });
+        expect_only<analysis_error>("product_uncertainty sizes",
+                                    [&] { (void)product_uncertainty(xs, short_span, xs); });
+        expect_only<>("round_for_report", [&] { (void)round_for_report(x, u); });
+      }
+  }
+
+  TEST_CASE("temperatures read from text: unit_error (temperature_error below 0 K) and dimension_error only") {
+    for (const std::string& text :
+         std::vector<std::string>{"", "40 degC", "-300 degC", "-1e308 degF", "1e308 K", "40 deg C", "5 m", "nan K",
+                                  "-273.15 degC", "-459.68 degF", "0 degR", std::string(5000, '9')}) {
+      expect_only<unit_error, dimension_error>("parse_temperature_point " + text,
+                                               [&] { (void)parse_temperature_point(text); });
+      expect_only<unit_error, dimension_error>("parse_temperature_difference " + text,
+                                               [&] { (void)parse_temperature_difference(text); });
+      expect_only<unit_error, dimension_error>("parse_quantity<temperature> " + text,
+                                               [&] { (void)parse_quantity<dims::temperature>(text); });
+    }
+    // below absolute zero is the typed error, with the value in kelvin (SI Brochure: 0 K is absolute zero)
+    CHECK_THROWS_AS((void)parse_temperature_point("-300 degC"), temperature_error);
+    CHECK(expect_only<unit_error>("convert", [] { (void)convert(-300.0, "degC", "K"); }) == outcome::threw_documented);
+  }
+
+  TEST_CASE("whole-field conversions and state views: field_size_error only, nothing written") {
+    const auto s = scales(1.2 * units::kg / units::m3, 10.0 * units::m / units::s, 0.5 * units::m);
+    std::vector<double> storage{1.0, 2.0, 3.0};
+    const field_view<dims::pressure> v{std::span<double>(storage)};
+    for (const std::size_t n : {std::size_t{0}, std::size_t{2}, std::size_t{4}, std::size_t{1000}}) {
+      std::vector<double> out(n, -1.0);
+      CHECK(expect_only<field_size_error>("nondimensional", [&] { s.nondimensional(v, out); }) ==
+            outcome::threw_documented);
+      CHECK(std::all_of(out.begin(), out.end(), [](double y) { return y == -1.0; }));
+      CHECK(expect_only<field_size_error>("dimensional", [&] { s.dimensional(out, v); }) == outcome::threw_documented);
+      CHECK(storage == std::vector<double>{1.0, 2.0, 3.0});
     }
   }
 }
