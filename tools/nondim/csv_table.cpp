@@ -37,7 +37,8 @@ std::string shown(std::string_view cell) {
 std::string position(const csv_state& st, std::size_t column) {
   const csv_numbers& t = *st.out;
   std::string s = t.path + ":" + std::to_string(st.record_line) + ": row " + std::to_string(t.lines.size() + 1);
-  if (column < t.header.size()) s += ", column " + std::to_string(column + 1) + " '" + t.header[column] + "'";
+  s += ", column " + std::to_string(column + 1);
+  if (column < t.header.size()) s += " '" + t.header[column] + "'";
   return s + ": ";
 }
 

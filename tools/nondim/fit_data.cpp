@@ -314,10 +314,11 @@ std::string fit_text(const fit_report& r) {
     s += "\nconstant over the data, not fitted: " + r.symbols_utf8[c.column + 1] + " = " + printed(c.value) +
          " (its power is part of C)\n";
   s += "\nquality: R\u00b2 of the logarithms " + printed(f.r2, 4) +
-       "; relative deviation (predicted - measured)/measured: RMS " + percent(f.rms_relative) + ", largest " +
+       "\n  relative deviation (predicted - measured)/measured: RMS " + percent(f.rms_relative) + ", largest " +
        percent(f.max_relative) + " (row " + std::to_string(f.max_relative_row + 1) + ", line " +
-       std::to_string(r.lines[f.max_relative_row]) + "); within \u00b110 %: " + percent(f.within_10) +
+       std::to_string(r.lines[f.max_relative_row]) + ")\n  within \u00b110 %: " + percent(f.within_10) +
        ", within \u00b120 %: " + percent(f.within_20) + "\n";
+
   if (!f.outliers.empty()) {
     s += "\noutliers (|studentised residual| > 3), kept in the fit; check them:\n";
     for (const fit_outlier& o : f.outliers)
