@@ -25,7 +25,10 @@ double seconds_since(std::chrono::steady_clock::time_point t0) {
 }  // namespace
 
 int main(int argc, char** argv) {
-  const std::size_t rows = argc > 1 ? std::stoul(argv[1]) : 1000000;
+  // a row count may be given; run_all.sh's --benchmark_* options are ignored
+  std::size_t rows = 1000000;
+  for (int i = 1; i < argc; ++i)
+    if (argv[i][0] != '-') rows = std::stoul(argv[i]);
   const std::string path = (std::filesystem::temp_directory_path() / "nondim_fit_bench.csv").string();
   {
     std::mt19937_64 random(42);
