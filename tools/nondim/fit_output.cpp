@@ -149,17 +149,13 @@ void fit_plot(const fit_report& r, const std::string& path) {
                     "everything else of nondim fit works without it"));
 
   const fit_result& f = r.result;
-  // the leading group: the fitted one that spans most decades (else a held one)
-  std::size_t lead = f.terms.size();
-  double span = -1.0;
-  for (std::size_t t = 0; t < f.terms.size(); ++t) {
-    const fit_range& g = f.ranges[f.terms[t].column + 1];
-    const double decades = std::log10(g.max / g.min) + (f.terms[t].fixed ? -1e6 : 0.0);
-    if (decades > span) {
-      span = decades;
+  // the leading group: the first fitted one (Re in Nu = C Re^a Pr^b), else the first held one
+  std::size_t lead = 0;  // f.terms.size() == 0: no group varies, x is 1
+  for (std::size_t t = 0; t < f.terms.size(); ++t)
+    if (!f.terms[t].fixed) {
       lead = t;
+      break;
     }
-  }
   const fs::path dir = picture.has_parent_path() ? picture.parent_path() : fs::path(".");
   const std::string stem = picture.stem().string();
   const std::string data_name = stem + ".dat";
@@ -202,7 +198,7 @@ void fit_plot(const fit_report& r, const std::string& path) {
     x_max = std::max(x_max, v);
   }
   const double band = std::exp(f.t_quantile * f.residual_sd);
-  std::string title = r.symbols_utf8[0] + " = " + gnuplot_number(std::round(f.coefficient.value * 1e4) / 1e4);
+  std::string title = label(r.symbols_utf8[0]) + " = " + gnuplot_number(std::round(f.coefficient.value * 1e4) / 1e4);
   for (const fit_term& t : f.terms)
     title += " " + label(r.symbols_utf8[t.column + 1]) + "^{" +
              gnuplot_number(std::round(t.exponent.value * 1000) / 1000) + "}";
@@ -224,10 +220,11 @@ void fit_plot(const fit_report& r, const std::string& path) {
        << "     f(x) with lines lw 2 lc rgb '#225588' title 'fit', \\\n"
        << "     " << quoted(data_name)
        << " using 1:($5 == 0 ? $2 : 1/0) with points pt 7 ps 1.1 lc rgb '#cc4411' "
-          "title 'data', \\\n"
-       << "     " << quoted(data_name)
-       << " using 1:($5 == 1 ? $2 : 1/0) with points pt 6 ps 2.2 lw 2 lc rgb '#000000' "
-          "title 'flagged outlier'\n";
+          "title 'data'";
+    if (!f.outliers.empty())
+      gp << ", \\\n     " << quoted(data_name)
+         << " using 1:($5 == 1 ? $2 : 1/0) with points pt 6 ps 2.2 lw 2 lc rgb '#000000' title 'flagged outlier'";
+    gp << "\n";
     if (!gp) throw input_error(with_prefix("--plot: cannot write " + (dir / script_name).string()));
   }
   const pid_t child = ::fork();
