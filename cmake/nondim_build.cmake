@@ -4,7 +4,7 @@
 # TRUE when one of the sources, or a header of its own folder that it includes with quotes
 # (followed transitively), includes a header of the analysis half: anything under
 # <nondim/analysis/...>, or the entry headers <nondim/analysis.hpp>, <nondim/similarity.hpp>,
-# <nondim/report.hpp>, <nondim/nondim.hpp>, <nondim/implementation.ipp>. Such a source needs
+# <nondim/data.hpp>, <nondim/report.hpp>, <nondim/nondim.hpp>, <nondim/implementation.ipp>. Such a source needs
 # nondim::compiled or nondim::nondim; any other needs nondim::quantity alone.
 function(nondim_uses_analysis out)
   set(pending "")
@@ -23,7 +23,7 @@ function(nondim_uses_analysis out)
     get_filename_component(dir "${file}" DIRECTORY)
     file(STRINGS "${file}" lines REGEX "^[ \t]*#[ \t]*include")
     foreach(line IN LISTS lines)
-      if(line MATCHES "<nondim/(analysis/|analysis\\.hpp|similarity\\.hpp|report\\.hpp|nondim\\.hpp|implementation\\.ipp)")
+      if(line MATCHES "<nondim/(analysis/|analysis\\.hpp|data\\.hpp|similarity\\.hpp|report\\.hpp|nondim\\.hpp|implementation\\.ipp)")
         set(result TRUE)
         break()
       elseif(line MATCHES "\"([^\"]+)\"" AND EXISTS "${dir}/${CMAKE_MATCH_1}")

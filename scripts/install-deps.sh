@@ -3,7 +3,7 @@
 # Usage: scripts/install-deps.sh [extra-package ...]
 set -eu
 packages="cmake ninja-build g++ clang libclang-rt-14-dev libeigen3-dev libboost-dev doctest-dev
-libcli11-dev libtomlplusplus-dev nlohmann-json3-dev python3 python3-sympy python3-uncertainties libbenchmark-dev valgrind
+libcli11-dev libtomlplusplus-dev libcsv-dev gnuplot-nox python3-statsmodels nlohmann-json3-dev python3 python3-sympy python3-uncertainties libbenchmark-dev valgrind
 pkgconf make $*"
 missing=""
 for p in $packages; do

@@ -7,6 +7,8 @@
 #include "analysis.hpp"
 
 #include "analysis/data/design_point.hpp"
+#include "analysis/data/fit.hpp"
 #include "analysis/data/group_value.hpp"
 #include "analysis/data/rounding.hpp"
+#include "analysis/data/student_t.hpp"
 #include "analysis/names/regimes.hpp"

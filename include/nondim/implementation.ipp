@@ -11,6 +11,7 @@
 
 #include "nondim.hpp"
 
+#include "analysis/data/fit.ipp"
 #include "analysis/data/group_value.ipp"
 #include "analysis/extraction/analyze.ipp"
 #include "analysis/extraction/explain.ipp"

@@ -5,6 +5,7 @@
 
 #include <functional>
 #include <ostream>
+#include <string>
 #include <vector>
 
 namespace CLI {
@@ -24,5 +25,11 @@ subcommand add_convert(CLI::App& app);
 subcommand add_dim(CLI::App& app);
 subcommand add_scale(CLI::App& app);
 subcommand add_demo(CLI::App& app);
+subcommand add_fit(CLI::App& app);
+
+/// \brief Runs `nondim fit` (also for the demo): `demo` takes the built-in rig instead of files.
+/// \throws input_error for bad input.
+void run_fit(std::ostream& out, const std::string& file, const std::string& data, bool demo, const std::string& basis,
+             const std::vector<std::string>& fixes, const std::string& format, const std::string& plot);
 
 }  // namespace nondim::tool

@@ -193,8 +193,12 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
 }
 
 problem_input problem_from_file(const std::string& path) {
+  return problem_from_loaded(load_problem_file(path));
+}
+
+problem_input problem_from_loaded(problem_file loaded) {
   problem_input in;
-  in.file = load_problem_file(path);
+  in.file = std::move(loaded);
   const problem_file& f = *in.file;
   for (const file_variable& v : f.variables) {
     const std::string line = f.at(v.where);

@@ -32,6 +32,10 @@ problem_input problem_from_arguments(const std::vector<std::string>& args);
 /// \throws input_error naming the file and line.
 problem_input problem_from_file(const std::string& path);
 
+/// \brief From a problem file already read (`parse_problem_text`).
+/// \throws input_error naming the file and line.
+problem_input problem_from_loaded(problem_file loaded);
+
 /// \brief `--dependent NAME` given on the command line (overrides the file).
 void override_dependent(problem_input& in, const std::string& name);
 

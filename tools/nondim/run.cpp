@@ -18,7 +18,7 @@ namespace nondim::tool {
 
 namespace {
 
-constexpr std::string_view subcommand_list = "groups, convert, dim, scale or demo";
+constexpr std::string_view subcommand_list = "groups, fit, convert, dim, scale or demo";
 
 int dispatch(int argc, const char* const* argv, std::ostream& out, std::ostream& err) {
   CLI::App app{"nondim: dimensionless groups, unit conversion and scale-model planning for engineers", "nondim"};
@@ -29,6 +29,7 @@ int dispatch(int argc, const char* const* argv, std::ostream& out, std::ostream&
 
   std::vector<subcommand> commands;
   commands.push_back(add_groups(app));
+  commands.push_back(add_fit(app));
   commands.push_back(add_convert(app));
   commands.push_back(add_dim(app));
   commands.push_back(add_scale(app));
