@@ -12,6 +12,7 @@
 #include "nondim.hpp"
 
 #include "analysis/data/group_value.ipp"
+#include "analysis/extraction/alternatives.ipp"
 #include "analysis/extraction/analyze.ipp"
 #include "analysis/extraction/explain.ipp"
 #include "analysis/extraction/null_space.ipp"
