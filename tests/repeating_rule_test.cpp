@@ -29,7 +29,7 @@ TEST_SUITE("repeating rule") {
     // DESIGN.md, "Rules for the groups" (the tiers), on the dimensions of ISO 80000-3/-4/-5.
     CHECK(repeating_tier_of(dims::length) == repeating_tier::geometric);
     CHECK(repeating_tier_of(dims::velocity) == repeating_tier::kinematic);
-    CHECK(repeating_tier_of(dims::frequency) == repeating_tier::kinematic);  // rotational speed n
+    CHECK(repeating_tier_of(dims::frequency) == repeating_tier::kinematic);     // rotational speed n
     CHECK(repeating_tier_of(dims::acceleration) == repeating_tier::kinematic);  // g
     CHECK(repeating_tier_of(dims::density) == repeating_tier::material);
     CHECK(repeating_tier_of(dims::surface_tension) == repeating_tier::last_resort);
@@ -73,10 +73,10 @@ TEST_SUITE("repeating rule") {
         .add("sigma", dims::surface_tension);
     const analysis a = analyze(p);
     CHECK(a.repeating == std::vector<std::string>{"V", "L", "rho"});
-    check_groups(a, {expected_group{{"F", 1}, {"rho", -1}, {"V", -2}, {"L", -2}},
-                     expected_group{{"mu", 1}, {"rho", -1}, {"V", -1}, {"L", -1}},
-                     expected_group{{"g", 1}, {"L", 1}, {"V", -2}},
-                     expected_group{{"sigma", 1}, {"rho", -1}, {"V", -2}, {"L", -1}}});
+    check_groups(
+        a, {expected_group{{"F", 1}, {"rho", -1}, {"V", -2}, {"L", -2}},
+            expected_group{{"mu", 1}, {"rho", -1}, {"V", -1}, {"L", -1}}, expected_group{{"g", 1}, {"L", 1}, {"V", -2}},
+            expected_group{{"sigma", 1}, {"rho", -1}, {"V", -2}, {"L", -1}}});
   }
 
   TEST_CASE("a pump: D, n, rho give the flow, head and power coefficients") {
@@ -151,11 +151,11 @@ TEST_SUITE("repeating rule") {
     CHECK(a.repeating == std::vector<std::string>{"L", "g", "dT", "rho"});
     CHECK_FALSE(a.is_repeating("beta"));
     CHECK(a.groups.size() == 5);
-    check_groups(a, {expected_group{{"h", 2}, {"dT", 2}, {"rho", -2}, {"g", -3}, {"L", -3}},
-                     expected_group{{"beta", 1}, {"dT", 1}},
-                     expected_group{{"mu", 2}, {"rho", -2}, {"g", -1}, {"L", -3}},
-                     expected_group{{"k", 2}, {"dT", 2}, {"rho", -2}, {"g", -3}, {"L", -5}},
-                     expected_group{{"cp", 1}, {"dT", 1}, {"g", -1}, {"L", -1}}});
+    check_groups(a,
+                 {expected_group{{"h", 2}, {"dT", 2}, {"rho", -2}, {"g", -3}, {"L", -3}},
+                  expected_group{{"beta", 1}, {"dT", 1}}, expected_group{{"mu", 2}, {"rho", -2}, {"g", -1}, {"L", -3}},
+                  expected_group{{"k", 2}, {"dT", 2}, {"rho", -2}, {"g", -3}, {"L", -5}},
+                  expected_group{{"cp", 1}, {"dT", 1}, {"g", -1}, {"L", -1}}});
   }
 
   TEST_CASE("pipe pressure drop: D, V, rho in the book's order") {
@@ -172,9 +172,9 @@ TEST_SUITE("repeating rule") {
         .add("rho", dims::density);
     const analysis a = analyze(p);
     CHECK(sorted(a.repeating) == sorted({"D", "V", "rho"}));
-    check_groups(a, {expected_group{{"dp", 1}, {"rho", -1}, {"V", -2}}, expected_group{{"l", 1}, {"D", -1}},
-                     expected_group{{"eps", 1}, {"D", -1}},
-                     expected_group{{"mu", 1}, {"rho", -1}, {"V", -1}, {"D", -1}}});
+    check_groups(a,
+                 {expected_group{{"dp", 1}, {"rho", -1}, {"V", -2}}, expected_group{{"l", 1}, {"D", -1}},
+                  expected_group{{"eps", 1}, {"D", -1}}, expected_group{{"mu", 1}, {"rho", -1}, {"V", -1}, {"D", -1}}});
   }
 
   TEST_CASE("kinematic viscosity repeats only when nothing else closes the rank") {

@@ -32,9 +32,7 @@ enum class repeating_tier {
 /// \brief The tier of a variable of dimension `d`.
 [[nodiscard]] inline repeating_tier repeating_tier_of(const dimension& d) noexcept {
   // exponents over L M T I Theta N J
-  const auto is = [&d](int l, int m, int t, int theta) {
-    return d == dimension{l, m, t, 0, theta, 0, 0};
-  };
+  const auto is = [&d](int l, int m, int t, int theta) { return d == dimension{l, m, t, 0, theta, 0, 0}; };
   if (is(1, 0, 0, 0)) return repeating_tier::geometric;
   if (is(1, 0, -1, 0) || is(0, 0, -1, 0) || is(1, 0, -2, 0)) return repeating_tier::kinematic;
   if (is(-3, 1, 0, 0)) return repeating_tier::material;

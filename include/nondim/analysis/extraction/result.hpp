@@ -42,8 +42,9 @@ struct rank_deficiency {
 struct analysis {
   std::size_t rank = 0;                ///< exact rank of the dimension matrix
   std::vector<std::string> repeating;  ///< as given, or the automatic choice in input order
-  std::vector<pi_group> groups;        ///< n - rank of them: the dependent variable's first, then by input position of their non-repeating variable
-  std::vector<std::string> isolated;   ///< variables that can appear in no group, in input order
+  std::vector<pi_group> groups;  ///< n - rank of them: the dependent variable's first, then by input position of their
+                                 ///< non-repeating variable
+  std::vector<std::string> isolated;  ///< variables that can appear in no group, in input order
 
   std::vector<std::string> isolated_reasons;  ///< one ASCII sentence per isolated variable
   std::vector<variable> variables;            ///< the problem's variables, in order
@@ -54,7 +55,7 @@ struct analysis {
   /// so in the classical basis; in the named basis, whether the catalog groups kept to the
   /// repeating variables (when not, they were not used).
   bool repeating_kept = true;
-  bool missing_variable = false;              ///< the dependent variable is isolated: the problem lacks a variable
+  bool missing_variable = false;  ///< the dependent variable is isolated: the problem lacks a variable
   rank_deficiency deficiency;
   svd_check svd;
   basis form = basis::classical;   ///< the basis the groups are in

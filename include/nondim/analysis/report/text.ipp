@@ -48,8 +48,7 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
   s += "rank " + std::to_string(a.rank) + "\n";
   if (a.deficiency.deficient) s += "  " + detail::explain_deficiency(a.rank, a.deficiency, form) + "\n";
   s += "dependent " + display_name(a.dependent, form) + "\n";
-  s += "repeating " + detail::comma_list(a.repeating, form) +
-       " (" + a.repeating_origin() + ")\n";
+  s += "repeating " + detail::comma_list(a.repeating, form) + " (" + a.repeating_origin() + ")\n";
 
   const std::vector<std::optional<group_value>> values = detail::report_values(a, o);
   s += "groups (" + std::to_string(a.groups.size()) + ")\n";
@@ -84,8 +83,10 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
     if (note != a.deficiency.explanation) s += "note: " + note + "\n";
   for (const auto& note : detail::regime_sentences(a, values, form)) s += "note: " + note + "\n";
   if (o.alternatives) {
-    if (o.alternatives->empty()) s += "alternatives: none (no other admissible repeating variables)\n";
-    else s += "alternatives (other admissible repeating variables, best first by the rule)\n";
+    if (o.alternatives->empty())
+      s += "alternatives: none (no other admissible repeating variables)\n";
+    else
+      s += "alternatives (other admissible repeating variables, best first by the rule)\n";
     for (std::size_t i = 0; i < o.alternatives->size(); ++i) {
       const analysis& x = (*o.alternatives)[i];
       s += "  " + std::to_string(i + 1) + ". repeating " + detail::comma_list(x.repeating, form) + "\n";

@@ -26,8 +26,8 @@ namespace nondim::detail {
 /// What the exact elimination yields; every number fits in 64 bits.
 struct exact_outcome {
   std::size_t rank = 0;
-  std::vector<std::size_t> repeating;             ///< input indices, in the order reported
-  std::vector<std::size_t> heads;                 ///< non-repeating variable of each group: the dependent one first, then ascending
+  std::vector<std::size_t> repeating;  ///< input indices, in the order reported
+  std::vector<std::size_t> heads;  ///< non-repeating variable of each group: the dependent one first, then ascending
   std::vector<std::vector<std::int64_t>> groups;  ///< aligned with `heads`, n entries each
   std::vector<dimension> spanning;                ///< primitive basis of the dimensions spanned
   bool spanning_too_large = false;                ///< that basis has exponents beyond 64 bits
