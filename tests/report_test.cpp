@@ -144,6 +144,21 @@ TEST_SUITE("report") {
     CHECK(contains(t, "in named groups: C_D = f(Re)\n"));
   }
 
+  TEST_CASE("the relation in named groups is written only when it differs from the classical one") {
+    // forced convection with k, mu, D, U repeating: the classical groups are already Nu, Re
+    // and Pr (Bergman et al., Fundamentals of Heat and Mass Transfer, 7th ed., 6.5, from memory)
+    problem p;
+    p.add("h", "W/(m^2*K)").add("k", "W/(m*K)").add("D", "m").add("U", "m/s").add("rho", "kg/m^3");
+    p.add("mu", "Pa*s").add("cp", "J/(kg*K)");
+    options o;
+    o.repeating = {"k", "mu", "D", "U"};
+    const analysis a = analyze(p, o);
+    CHECK(relation(a, text_form::ascii) == "Nu = f(Re, Pr)");
+    CHECK_FALSE(contains(text_report(a), "in named groups"));
+    // with the rule's D, U, rho, cp the classical groups are St, 1/Re, 1/Pe: the line is there
+    CHECK(contains(text_report(analyze(p)), "in named groups: Nu = f(Re, Pr)\n"));
+  }
+
   TEST_CASE("a fractional exponent is the string p/q in JSON") {
     problem p;  // K = Y sigma sqrt(pi a) (Anderson, Fracture Mechanics, 3rd ed., 2.6): K in Pa*m^(1/2)
     p.add("sigma", "MPa").add("K", "MPa*m^(1/2)").add("a", "mm");
