@@ -120,12 +120,26 @@ big abs_sum(const dimension& d) {
   return s;
 }
 
+/// DESIGN.md's tiers ("Rules for the groups"), restated independently of the library: a
+/// length; a velocity, rotational speed or acceleration; a density; the others; surface
+/// tension, viscosity (dynamic or kinematic), expansion coefficient and pure numbers last.
+int tier(const dimension& d) {
+  if (d == dims::length) return 0;
+  if (d == dims::velocity || d == dims::frequency || d == dims::acceleration) return 1;
+  if (d == dims::density) return 2;
+  if (d.is_dimensionless() || d == dims::surface_tension || d == dims::dynamic_viscosity ||
+      d == dims::kinematic_viscosity || d == dimension{} / dims::temperature)
+    return 4;
+  return 3;
+}
+
 /// DESIGN.md's rule for the automatic choice, restated independently of the library.
 std::vector<std::size_t> automatic_choice(const std::vector<dimension>& dims, std::size_t dependent) {
   std::vector<std::size_t> order;
   for (std::size_t j = 0; j < dims.size(); ++j)
     if (j != dependent) order.push_back(j);
   std::stable_sort(order.begin(), order.end(), [&](std::size_t x, std::size_t y) {
+    if (tier(dims[x]) != tier(dims[y])) return tier(dims[x]) < tier(dims[y]);
     if (dims[x].base_count() != dims[y].base_count()) return dims[x].base_count() < dims[y].base_count();
     return abs_sum(dims[x]) < abs_sum(dims[y]);
   });
@@ -184,7 +198,7 @@ TEST_SUITE("analysis properties") {
 
       // every group: dimensionless exactly, primitive, classical form, ordered by its variable
       std::vector<std::vector<big>> vectors;
-      std::size_t previous_head = 0;
+      std::vector<std::size_t> heads;
       for (std::size_t k = 0; k < a.groups.size(); ++k) {
         const pi_group& g = a.groups[k];
         REQUIRE(g.exponents.size() == n);
@@ -198,13 +212,20 @@ TEST_SUITE("analysis properties") {
         CHECK(non_repeating == 1);
         CHECK(std::find(rep.begin(), rep.end(), g.non_repeating) == rep.end());
         CHECK(g.exponents[g.non_repeating] > 0);
-        if (k > 0) CHECK(g.non_repeating > previous_head);
-        previous_head = g.non_repeating;
+        heads.push_back(g.non_repeating);
         std::vector<big> v;
         for (auto e : g.exponents) v.emplace_back(e);
         vectors.push_back(v);
       }
       CHECK(rank_of(vectors) == a.groups.size());  // independent
+      // the dependent variable's group first (DESIGN.md), the others by input position
+      const auto dep = std::find(heads.begin(), heads.end(), rc.dependent);
+      if (dep != heads.end()) {
+        CHECK(dep == heads.begin());
+        heads.erase(dep);
+      }
+      CHECK(std::is_sorted(heads.begin(), heads.end()));
+      CHECK(std::adjacent_find(heads.begin(), heads.end()) == heads.end());
 
       // isolated: exactly the variables whose dimension the others cannot cancel
       for (std::size_t j = 0; j < n; ++j) {

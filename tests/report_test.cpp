@@ -90,8 +90,14 @@ TEST_SUITE("report") {
 
   TEST_CASE("the JSON view follows the schema of DESIGN.md") {
     const auto j = nlohmann::json::parse(json_report(drag()));
-    CHECK(j.size() == 5);
+    CHECK(j.size() == 11);  // no "alternatives" unless asked for
+    CHECK(j["title"] == "");
     CHECK(j["rank"] == 3);
+    CHECK(j["rank_explanation"] == "");
+    CHECK(j["dependent"] == "F");
+    CHECK(j["basis"] == "classical");
+    CHECK(j["repeating_origin"] == "chosen automatically");
+    CHECK(j["isolated"] == nlohmann::json::array());
     CHECK(j["repeating"] == nlohmann::json::array({"rho", "U", "D"}));
     CHECK(j["variables"][0] ==
           nlohmann::json::parse(R"({"name": "F", "unit": "N", "dimension": {"L": 1, "M": 1, "T": -2}})"));
@@ -104,6 +110,53 @@ TEST_SUITE("report") {
     CHECK(j["svd_check"]["agrees"] == true);
     CHECK(j["svd_check"]["singular_values"].size() == 5);  // min(7, n)
     CHECK(j["svd_check"]["max_residual"] == 0.0);
+  }
+
+  TEST_CASE("the JSON view gives the title, the isolated variables with reasons and the alternatives") {
+    // the pendulum with its mass (Fox and McDonald, 8th ed., 7.2): m is in no group because
+    // no other variable has M; the other admissible repeating set of t, L, m, g with t
+    // dependent is none (L, m, g are the only three of independent dimensions)
+    problem p;
+    p.add("t", "s").add("L", "m").add("m", "kg").add("g", "m/s^2");
+    const analysis a = analyze(p);
+    report_options o;
+    o.title = "Pendulum";
+    o.alternatives = alternatives(p);
+    const auto j = nlohmann::json::parse(json_report(a, o));
+    CHECK(j["title"] == "Pendulum");
+    REQUIRE(j["isolated"].size() == 1);
+    CHECK(j["isolated"][0]["name"] == "m");
+    CHECK(j["isolated"][0]["reason"].get<std::string>().find("base dimension M appears in no other variable") !=
+          std::string::npos);
+    CHECK(j["alternatives"] == nlohmann::json::array());
+
+    // the drag on a sphere (White, 7th ed., 5.2-5.3): three other sets, first D, V, mu
+    problem q;
+    q.add("F", "N").add("D", "m").add("V", "m/s").add("rho", "kg/m^3").add("mu", "Pa*s");
+    o.alternatives = alternatives(q);
+    const auto k = nlohmann::json::parse(json_report(analyze(q), o));
+    REQUIRE(k["alternatives"].size() == 3);
+    CHECK(k["alternatives"][0]["repeating"] == nlohmann::json::array({"D", "V", "mu"}));
+    CHECK(k["alternatives"][0]["groups"][0]["exponents"] ==
+          nlohmann::json::parse(R"({"F": 1, "D": -1, "V": -1, "mu": -1})"));
+    const std::string t = text_report(analyze(q), o);
+    CHECK(contains(t, "  1. repeating D, V, \u03bc\n"));
+    CHECK(contains(t, "in named groups: C_D = f(Re)\n"));
+  }
+
+  TEST_CASE("the relation in named groups is written only when it differs from the classical one") {
+    // forced convection with k, mu, D, U repeating: the classical groups are already Nu, Re
+    // and Pr (Bergman et al., Fundamentals of Heat and Mass Transfer, 7th ed., 6.5, from memory)
+    problem p;
+    p.add("h", "W/(m^2*K)").add("k", "W/(m*K)").add("D", "m").add("U", "m/s").add("rho", "kg/m^3");
+    p.add("mu", "Pa*s").add("cp", "J/(kg*K)");
+    options o;
+    o.repeating = {"k", "mu", "D", "U"};
+    const analysis a = analyze(p, o);
+    CHECK(relation(a, text_form::ascii) == "Nu = f(Re, Pr)");
+    CHECK_FALSE(contains(text_report(a), "in named groups"));
+    // with the rule's D, U, rho, cp the classical groups are St, 1/Re, 1/Pe: the line is there
+    CHECK(contains(text_report(analyze(p)), "in named groups: Nu = f(Re, Pr)\n"));
   }
 
   TEST_CASE("a fractional exponent is the string p/q in JSON") {

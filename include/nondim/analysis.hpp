@@ -9,6 +9,7 @@
 #include "quantity.hpp"
 #include "solver.hpp"
 
+#include "analysis/extraction/alternatives.hpp"
 #include "analysis/extraction/analyze.hpp"
 #include "analysis/extraction/error.hpp"
 #include "analysis/extraction/matrix.hpp"
@@ -16,6 +17,7 @@
 #include "analysis/extraction/options.hpp"
 #include "analysis/extraction/pi_group.hpp"
 #include "analysis/extraction/problem.hpp"
+#include "analysis/extraction/repeating_rule.hpp"
 #include "analysis/extraction/result.hpp"
 #include "analysis/extraction/runtime_scales.hpp"
 #include "analysis/extraction/svd_check.hpp"

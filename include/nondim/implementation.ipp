@@ -13,6 +13,7 @@
 
 #include "analysis/data/fit.ipp"
 #include "analysis/data/group_value.ipp"
+#include "analysis/extraction/alternatives.ipp"
 #include "analysis/extraction/analyze.ipp"
 #include "analysis/extraction/explain.ipp"
 #include "analysis/extraction/null_space.ipp"

@@ -71,8 +71,13 @@ def keys(obj, where, required, optional, problems):
 
 
 def check_groups(v, problems):
-    if not keys(v, "root", ["variables", "rank", "repeating", "groups", "svd_check"], ["scales"], problems):
+    if not keys(v, "root", ["title", "variables", "rank", "rank_explanation", "dependent", "basis", "repeating",
+                            "repeating_origin", "groups", "isolated", "svd_check"], ["scales", "alternatives"],
+                problems):
         return
+    for k in ["title", "rank_explanation", "repeating_origin"]:
+        if not isinstance(v[k], str):
+            problems.append("%s: not a string" % k)
     names, dims = [], {}
     for i, var in enumerate(v["variables"]):
         w = "variables[%d]" % i
@@ -93,9 +98,43 @@ def check_groups(v, problems):
             problems.append("rank %d, but sympy finds %d" % (rank, m.rank()))
     except ImportError:
         problems.append("python3-sympy is needed for the rank check")
+    if v["dependent"] not in names:
+        problems.append("dependent: %r is not a variable" % (v["dependent"],))
+    if v["basis"] not in ("classical", "named"):
+        problems.append("basis: %r is neither 'classical' nor 'named'" % (v["basis"],))
+    isolated = v["isolated"]
+    if not isinstance(isolated, list):
+        problems.append("isolated: not a list")
+        isolated = []
+    for i, x in enumerate(isolated):
+        w = "isolated[%d]" % i
+        if keys(x, w, ["name", "reason"], [], problems):
+            if x["name"] not in names or not isinstance(x["reason"], str) or not x["reason"]:
+                problems.append("%s: a variable of the problem with a non-empty reason" % w)
     rep = v["repeating"]
     if not isinstance(rep, list) or any(r not in names for r in rep) or len(rep) != rank:
         problems.append("repeating: must list %d variables of the problem" % rank)
+    if isinstance(rep, list) and v["dependent"] in rep and v["dependent"] not in [x.get("name") for x in isolated
+                                                                                  if isinstance(x, dict)]:
+        if not v["repeating_origin"].startswith("given"):
+            problems.append("repeating: the dependent variable repeats only when given or isolated")
+    if "alternatives" in v:
+        alts = v["alternatives"]
+        if not isinstance(alts, list):
+            problems.append("alternatives: not a list")
+            alts = []
+        for i, a in enumerate(alts):
+            w = "alternatives[%d]" % i
+            if not keys(a, w, ["repeating", "groups"], [], problems):
+                continue
+            sub = {"title": "", "variables": v["variables"], "rank": rank, "rank_explanation": "",
+                   "dependent": v["dependent"], "basis": "classical", "repeating": a["repeating"],
+                   "repeating_origin": "given", "groups": a["groups"], "isolated": [], "svd_check": v["svd_check"]}
+            inner = []
+            check_groups(sub, inner)
+            problems.extend("%s: %s" % (w, p) for p in inner)
+            if isinstance(a["repeating"], list) and v["dependent"] in a["repeating"]:
+                problems.append("%s: the dependent variable is never an alternative repeating variable" % w)
     groups = v["groups"]
     if not isinstance(groups, list) or len(groups) != len(names) - rank:
         problems.append("groups: %d variables of rank %d need %d groups" % (len(names), rank, len(names) - rank))

@@ -10,6 +10,7 @@ sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 import check_schema  # noqa: E402
 
 good = {
+    "title": "",
     "variables": [
         {"name": "F", "unit": "N", "dimension": {"L": 1, "M": 1, "T": -2}},
         {"name": "rho", "unit": "kg/m^3", "dimension": {"L": -3, "M": 1}},
@@ -18,7 +19,12 @@ good = {
         {"name": "mu", "unit": "Pa*s", "dimension": {"L": -1, "M": 1, "T": -1}},
     ],
     "rank": 3,
+    "rank_explanation": "",
+    "dependent": "F",
+    "basis": "classical",
     "repeating": ["rho", "U", "D"],
+    "repeating_origin": "chosen automatically",
+    "isolated": [],
     "groups": [
         {"exponents": {"F": 1, "rho": -1, "U": -2, "D": -2}, "text": "", "latex": "", "matches": []},
         {"exponents": {"mu": 1, "rho": -1, "U": -1, "D": -1}, "text": "", "latex": "",
@@ -47,6 +53,18 @@ cases = {
     "unsorted singular values": broken(lambda v: v["svd_check"].update(singular_values=[0.37, 3.7, 2.8])),
     "match without power": broken(lambda v: v["groups"][1]["matches"][0].pop("power")),
     "unknown base": broken(lambda v: v["variables"][3]["dimension"].update(X=1)),
+    "no dependent": broken(lambda v: v.pop("dependent")),
+    "unknown dependent": broken(lambda v: v.update(dependent="G")),
+    "unknown basis": broken(lambda v: v.update(basis="fancy")),
+    "isolated without reason": broken(lambda v: v.update(isolated=[{"name": "mu", "reason": ""}])),
+    "alternative not dimensionless": broken(lambda v: v.update(alternatives=[{
+        "repeating": ["mu", "U", "D"],
+        "groups": [{"exponents": {"F": 1, "mu": -1, "U": -1}, "text": "", "latex": "", "matches": []},
+                   {"exponents": {"rho": 1, "U": 1, "D": 1, "mu": -1}, "text": "", "latex": "", "matches": []}]}])),
+    "alternative repeats the dependent": broken(lambda v: v.update(alternatives=[{
+        "repeating": ["F", "U", "D"],
+        "groups": [{"exponents": {"rho": 1, "U": 2, "D": 2, "F": -1}, "text": "", "latex": "", "matches": []},
+                   {"exponents": {"mu": 1, "U": 1, "D": 1, "F": -1}, "text": "", "latex": "", "matches": []}]}])),
 }
 
 # with `groups --scales`: p* = F/(rho U^2 D^2) and mu/(rho U D), as the groups above
@@ -106,6 +124,14 @@ if check_schema.check("groups", scaled):
 if check_schema.check("groups", good):
     print("FAIL: the valid object is rejected:", check_schema.check("groups", good))
     failures += 1
+# with --alternatives: mu, U, D give the Stokes form F/(mu U D) and Re (White, 7th ed., 5.2)
+alternative = broken(lambda v: v.update(alternatives=[{
+    "repeating": ["mu", "U", "D"],
+    "groups": [{"exponents": {"F": 1, "mu": -1, "U": -1, "D": -1}, "text": "", "latex": "", "matches": []},
+               {"exponents": {"rho": 1, "U": 1, "D": 1, "mu": -1}, "text": "", "latex": "", "matches": []}]}]))
+if check_schema.check("groups", alternative):
+    print("FAIL: the valid object with alternatives is rejected:", check_schema.check("groups", alternative))
+    failures += 1
 for name, value in cases.items():
     if not check_schema.check("groups", value):
         print("FAIL: not rejected:", name)
@@ -130,5 +156,5 @@ for name, value in convert_bad.items():
     if not check_schema.check("convert", value):
         print("FAIL: not rejected:", name)
         failures += 1
-print("%d passed, %d failed" % (len(cases) + len(convert_bad) + 4 - failures, failures))
+print("%d passed, %d failed" % (len(cases) + len(convert_bad) + 5 - failures, failures))
 sys.exit(1 if failures else 0)

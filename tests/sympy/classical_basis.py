@@ -2,8 +2,10 @@
 """Independent reference for the classical pi-group basis of tests/textbook_problems.hpp,
 computed with python3-sympy (exact rationals) by the rule of DESIGN.md:
 
-  repeating variables: the non-dependent variables ordered by fewer base dimensions, then
-  smaller sum of |exponents|, then input order; take each that raises the rank; only if the
+  repeating variables: the non-dependent variables ordered by tier (a length; a velocity,
+  rotational speed or acceleration; a density; the others; surface tension, viscosity,
+  expansion coefficient and pure numbers last), then fewer base dimensions, then smaller
+  sum of |exponents|, then input order; take each that raises the rank; only if the
   rank is still short take the dependent (first) variable too.  Group k: one non-repeating
   variable (exponent > 0) times powers of the repeating ones, primitive integers, in input
   order of the non-repeating variable.
@@ -67,9 +69,22 @@ problems = {  # the names of tests/textbook_problems.hpp
 def rank(cols):
     return Matrix.hstack(*[Matrix(c) for c in cols]).rank() if cols else 0
 
+def tier(c):
+    """DESIGN.md, "Rules for the groups": the tier of a dimension in the choice of repeating
+    variables (lower first)."""
+    if c == length:
+        return 0
+    if c in (velocity, freq, accel):
+        return 1
+    if c == density:
+        return 2
+    if c in (one, sigma, mu, nu, beta):
+        return 4
+    return 3
+
 def basis(cols):
     n = len(cols)
-    key = lambda j: (sum(1 for e in cols[j] if e != 0), sum(abs(e) for e in cols[j]), j)
+    key = lambda j: (tier(cols[j]), sum(1 for e in cols[j] if e != 0), sum(abs(e) for e in cols[j]), j)
     rep = []
     for j in sorted(range(1, n), key=key):
         if rank([cols[i] for i in rep] + [cols[j]]) > len(rep):

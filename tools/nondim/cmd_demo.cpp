@@ -57,8 +57,10 @@ void run_demo(std::ostream& out) {
     p.add(v.name, v.unit);
     rows.push_back({v.name, std::isnan(v.value) ? "?" : readable_number(v.value), v.unit, v.note});
   }
+  // The rule repeats D, U, rho and cp (a Stanton-number form); the named basis writes the
+  // same relation as Nu = f(Re, Pr), the form of the correlation used below.
   options o;
-  o.repeating = {"D", "k", "mu", "rho"};
+  o.form = basis::named;
   const analysis a = analyze(p, o);
 
   // The demo's words below name the groups; check that the analysis gave those groups.
@@ -87,7 +89,7 @@ void run_demo(std::ostream& out) {
       << detail::aligned_table(rows,
                                {detail::align::left, detail::align::right, detail::align::left, detail::align::left}, 2)
       << "\n$ nondim groups h='W/(m^2*K)' U=m/s D=mm rho=kg/m^3 mu=Pa*s k='W/(m*K)' cp='J/(kg*K)' "
-         "--repeating D,k,mu,rho\n\n"
+         "--basis named\n\n"
       << text_report(a)
       << "\nAt the design point\n"
          "  Pi1 = h*D/k      Nusselt number Nu: the unknown, h in dimensionless form\n"

@@ -27,6 +27,7 @@ struct groups_args {
   std::string basis;
   std::string format = "text";
   bool scales = false;
+  bool alternatives = false;
 };
 }  // namespace
 
@@ -53,13 +54,18 @@ subcommand add_groups(CLI::App& app) {
   sub->add_flag("-s,--scales", args->scales,
                 "Also print the reference scale of every variable in the repeating variables, the form a "
                 "nondimensional solver divides it by (t* = t·U/D)");
+  sub->add_flag("-a,--alternatives", args->alternatives,
+                "Also list the other admissible sets of repeating variables with their groups, best first by the "
+                "rule (at most " +
+                    std::to_string(default_alternative_count) + ")");
   sub->footer(
       "Options given on the command line override those in the file.\n"
       "Examples:\n"
       "  nondim groups F=N rho=kg/m^3 U=m/s D=m mu=Pa*s\n"
       "  nondim groups dp=Pa 'rho=998 kg/m^3' 'U=2+-0.05 m/s' 'D=25 mm' 'mu=1.0+-2% mPa*s'\n"
       "  nondim groups --file pod.toml --repeating rho,U,D --format latex\n"
-      "  nondim groups --file pod.toml --scales");
+      "  nondim groups --file pod.toml --scales\n"
+      "  nondim groups --file pod.toml --alternatives");
   return {
       sub, [args](std::ostream& out) {
         if (!args->file.empty() && !args->variables.empty())
@@ -69,6 +75,11 @@ subcommand add_groups(CLI::App& app) {
         if (!args->repeating.empty()) override_repeating(in, args->repeating);
         if (!args->basis.empty()) in.options.form = args->basis == "named" ? basis::named : basis::classical;
         const analysis a = analyze_input(in);
+        if (args->alternatives) {
+          if (args->format == "latex" || args->format == "markdown")
+            throw input_error(with_prefix("--alternatives is available with --format text or json"));
+          in.report.alternatives = alternatives(in.problem, in.options);  // valid options: analyze_input passed
+        }
         try {
           (void)group_values(a, in.report.point);  // a value that no group can take (0 where it divides) is bad input
         } catch (const analysis_error& e) {

@@ -17,13 +17,16 @@ namespace nondim {
 /// \brief The dimensionless groups of `p`, exactly.
 ///
 /// The rank is the exact rank of the dimension matrix; there are `n - rank` groups. With
-/// `o.repeating` empty the repeating variables are chosen by the rule of DESIGN.md (the
-/// variables other than the dependent one, by fewer base dimensions, then smaller sum of
-/// |exponents|, then input order, each taken when it raises the rank; the dependent one
-/// last, and then it is isolated and `missing_variable` is set). Each group is in the
-/// classical form: one non-repeating variable with a positive exponent times powers of the
-/// repeating ones, primitive integer exponents; groups are ordered by the input position of
-/// their non-repeating variable. With `o.form == basis::named` the groups are then
+/// `o.repeating` empty the repeating variables are chosen by the rule of DESIGN.md
+/// (repeating_rule.hpp: a length, then a velocity, rotational speed or g, then a density,
+/// then the others by fewer base dimensions and smaller exponents, surface tension,
+/// viscosity and expansion coefficients last; input order breaks ties; each taken when it
+/// raises the rank; the dependent one last, and then it is isolated and `missing_variable`
+/// is set). Each group is in the classical form: one non-repeating variable with a
+/// positive exponent times powers of the repeating ones, primitive integer exponents; the
+/// group of the dependent variable first, the others by the input position of their
+/// non-repeating variable. In the named basis `repeating_kept` says whether the named
+/// groups kept to the repeating variables. With `o.form == basis::named` the groups are then
 /// re-expressed in catalog numbers where the null space allows (naming.hpp,
 /// named_basis.hpp). In either basis every group lists the catalog entries it matches in
 /// `pi_group::matches`. A numerical disagreement of the SVD check is reported in `svd`,

@@ -116,6 +116,15 @@ NONDIM_ANALYSIS_INLINE analysis analyze(const problem& p, const options& o) {
   std::vector<std::size_t> chosen;  // catalog entry of each group in the named basis
   if (o.form == basis::named) chosen = detail::rename_in_catalog_groups(a);
   detail::attach_matches(a, chosen);
+  if (a.form == basis::named) {
+    // the named groups keep to the repeating variables when each still has one other variable
+    a.repeating_kept = std::all_of(a.groups.begin(), a.groups.end(), [&a](const pi_group& g) {
+      std::size_t others = 0;
+      for (std::size_t j = 0; j < g.exponents.size(); ++j)
+        if (g.exponents[j] != 0 && !a.is_repeating(a.variables[j].name)) ++others;
+      return others <= 1;
+    });
+  }
   a.svd = check_with_svd(a.matrix, a.groups, a.rank);
   if (!a.svd.agrees)
     a.notes.push_back(detail::cat("the SVD in double finds rank ", std::to_string(a.svd.rank), ", the exact rank is ",

@@ -42,15 +42,20 @@ struct rank_deficiency {
 struct analysis {
   std::size_t rank = 0;                ///< exact rank of the dimension matrix
   std::vector<std::string> repeating;  ///< as given, or the automatic choice in input order
-  std::vector<pi_group> groups;        ///< n - rank of them, by input position of their non-repeating variable
-  std::vector<std::string> isolated;   ///< variables that can appear in no group, in input order
+  std::vector<pi_group> groups;  ///< n - rank of them: the dependent variable's first, then by input position of their
+                                 ///< non-repeating variable
+  std::vector<std::string> isolated;  ///< variables that can appear in no group, in input order
 
   std::vector<std::string> isolated_reasons;  ///< one ASCII sentence per isolated variable
   std::vector<variable> variables;            ///< the problem's variables, in order
   dimension_matrix matrix;                    ///< 7 x n, columns in input order
   std::string dependent;                      ///< the dependent variable
   bool repeating_given = false;               ///< the repeating variables came from the options
-  bool missing_variable = false;              ///< the dependent variable is isolated: the problem lacks a variable
+  /// Every group is one non-repeating variable times powers of the repeating ones. Always
+  /// so in the classical basis; in the named basis, whether the catalog groups kept to the
+  /// repeating variables (when not, they were not used).
+  bool repeating_kept = true;
+  bool missing_variable = false;  ///< the dependent variable is isolated: the problem lacks a variable
   rank_deficiency deficiency;
   svd_check svd;
   basis form = basis::classical;   ///< the basis the groups are in
@@ -63,6 +68,15 @@ struct analysis {
     n.reserve(variables.size());
     for (const auto& v : variables) n.push_back(v.name);
     return n;
+  }
+  /// \brief Where the repeating variables came from and whether the groups use them, for
+  /// reports: "given", "chosen automatically", or either followed by "; not used by the
+  /// named basis, whose groups are catalog numbers" or "; kept by the named basis".
+  [[nodiscard]] std::string repeating_origin() const {
+    std::string s = repeating_given ? "given" : "chosen automatically";
+    if (form != basis::named) return s;
+    return s + (repeating_kept ? "; kept by the named basis"
+                               : "; not used by the named basis, whose groups are catalog numbers");
   }
   /// \brief Position of the variable called `name`, if there is one.
   [[nodiscard]] std::optional<std::size_t> index_of(std::string_view name) const noexcept {

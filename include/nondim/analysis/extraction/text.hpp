@@ -40,6 +40,12 @@ namespace nondim {
 /// Only the base dimensions that appear get a row. ASCII writes `pi1`, `*`, `^-2`, names as given.
 std::string to_string(const analysis& a, text_form form = text_form::unicode);
 
+/// \brief The relation the groups state, the dependent group as a function of the others:
+/// `Nu = f(Re, Pr)`, each group written as the catalog number it matches first (with its
+/// power: `Re⁻¹`) or else as its product (`L·D⁻¹`). Empty when the dependent variable is in
+/// no group or is a repeating one (then no group is "its" group).
+std::string relation(const analysis& a, text_form form = text_form::unicode);
+
 template <class CharT, class Traits>
 std::basic_ostream<CharT, Traits>& operator<<(std::basic_ostream<CharT, Traits>& os, const analysis& a) {
   return os << to_string(a).c_str();

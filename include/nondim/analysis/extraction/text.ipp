@@ -72,6 +72,19 @@ inline std::string svd_line(const svd_check& c) {
 
 }  // namespace detail
 
+NONDIM_ANALYSIS_INLINE std::string relation(const analysis& a, text_form form) {
+  const auto d = a.index_of(a.dependent);
+  if (!d || a.groups.empty() || a.missing_variable || a.is_repeating(a.dependent)) return {};
+  if (a.groups.front().exponents.size() <= *d || a.groups.front().exponents[*d] == 0) return {};
+  const auto written = [form](const pi_group& g) {
+    if (g.matches.empty()) return g.text(form);
+    return std::string(g.matches.front().symbol) + detail::exponent_suffix(g.matches.front().power, form);
+  };
+  std::string s = written(a.groups.front()) + " = f(";
+  for (std::size_t k = 1; k < a.groups.size(); ++k) s += (k > 1 ? ", " : "") + written(a.groups[k]);
+  return s + ")";
+}
+
 NONDIM_ANALYSIS_INLINE std::string to_string(const analysis& a, text_form form) {
   const bool uni = form == text_form::unicode;
   std::string s = "dimension matrix\n";
@@ -108,7 +121,7 @@ NONDIM_ANALYSIS_INLINE std::string to_string(const analysis& a, text_form form) 
   for (std::size_t k = 0; k < a.repeating.size(); ++k)
     s.append(k ? ", " : "").append(display_name(a.repeating[k], form));
   if (a.repeating.empty()) s.append("none");
-  s.append(a.repeating_given ? " (given)\n" : " (chosen automatically)\n");
+  s.append(" (" + a.repeating_origin() + ")\n");
 
   s.append(cat("groups (", std::to_string(a.groups.size()), ")\n"));
   for (std::size_t k = 0; k < a.groups.size(); ++k)

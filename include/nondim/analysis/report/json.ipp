@@ -80,14 +80,36 @@ inline json_members json_report_members(const analysis& a, const report_options&
   for (std::size_t k = 0; k < a.groups.size(); ++k) groups.push_back(json_group(a.groups[k], values[k]));
   json_elements singular;
   for (const double v : a.svd.singular_values) singular.emplace_back(v);
-  return json_members{{"variables", std::move(variables)},
-                      {"rank", a.rank},
-                      {"repeating", std::move(repeating)},
-                      {"groups", std::move(groups)},
-                      {"svd_check", json_members{{"rank", a.svd.rank},
-                                                 {"agrees", a.svd.agrees},
-                                                 {"singular_values", std::move(singular)},
-                                                 {"max_residual", a.svd.max_residual}}}};
+  json_elements isolated;
+  for (std::size_t k = 0; k < a.isolated.size(); ++k)
+    isolated.emplace_back(json_members{
+        {"name", a.isolated[k]}, {"reason", k < a.isolated_reasons.size() ? a.isolated_reasons[k] : std::string()}});
+  json_members out{{"title", o.title},
+                   {"variables", std::move(variables)},
+                   {"rank", a.rank},
+                   {"rank_explanation", a.deficiency.explanation},
+                   {"dependent", a.dependent},
+                   {"basis", std::string(a.form == basis::named ? "named" : "classical")},
+                   {"repeating", std::move(repeating)},
+                   {"repeating_origin", a.repeating_origin()},
+                   {"groups", std::move(groups)},
+                   {"isolated", std::move(isolated)},
+                   {"svd_check", json_members{{"rank", a.svd.rank},
+                                              {"agrees", a.svd.agrees},
+                                              {"singular_values", std::move(singular)},
+                                              {"max_residual", a.svd.max_residual}}}};
+  if (o.alternatives) {
+    json_elements alts;
+    for (const analysis& x : *o.alternatives) {
+      json_elements rep;
+      for (const auto& r : x.repeating) rep.emplace_back(r);
+      json_elements gs;
+      for (const auto& g : x.groups) gs.push_back(json_group(g));
+      alts.emplace_back(json_members{{"repeating", std::move(rep)}, {"groups", std::move(gs)}});
+    }
+    out.emplace_back("alternatives", std::move(alts));
+  }
+  return out;
 }
 
 inline std::string json_text(const json_value& root) {

@@ -126,7 +126,8 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
   std::string s;
   if (!o.title.empty()) s += "% " + detail::one_line(o.title) + "\n";
   s += "% dimensionless groups of " + std::to_string(a.variables.size()) + " variables, rank " +
-       std::to_string(a.rank) + "; repeating: " + detail::comma_list(a.repeating) + "\n";
+       std::to_string(a.rank) + "; repeating: " + detail::comma_list(a.repeating) +
+       (a.repeating_kept ? "" : " (not used by the named basis)") + "\n";
   const std::vector<std::optional<group_value>> values = detail::report_values(a, o);
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     s += "\\[ \\Pi_{" + std::to_string(k + 1) + "} = " + latex(a.groups[k]);

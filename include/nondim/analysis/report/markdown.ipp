@@ -74,8 +74,7 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
   s += "\n";
   s += "**Rank** " + std::to_string(a.rank) + " · **dependent** " +
        detail::markdown_escape(display_name(a.dependent, form)) + " · **repeating** " +
-       detail::markdown_escape(detail::comma_list(a.repeating, form)) +
-       (a.repeating_given ? " (given)" : " (chosen automatically)") + "\n\n";
+       detail::markdown_escape(detail::comma_list(a.repeating, form)) + " (" + a.repeating_origin() + ")\n\n";
   if (a.deficiency.deficient)
     s += detail::markdown_escape(detail::explain_deficiency(a.rank, a.deficiency, form)) + "\n\n";
 

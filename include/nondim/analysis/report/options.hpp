@@ -3,10 +3,12 @@
 /// \brief What a report may be told besides the analysis: a title, a note per variable and
 /// the values of a design point.
 
+#include <optional>
 #include <string>
 #include <vector>
 
 #include "../data/design_point.hpp"
+#include "../extraction/result.hpp"
 
 namespace nondim {
 
@@ -18,6 +20,9 @@ struct report_options {
   /// with its value, its standard uncertainty when they all have one too, and the regimes
   /// of the named numbers it is (regimes.hpp).
   design_point point{};
+  /// The analyses with other repeating variables (`alternatives()`): listed after the
+  /// groups when present (an empty list says that there are none).
+  std::optional<std::vector<analysis>> alternatives{};
 };
 
 }  // namespace nondim

@@ -7,6 +7,8 @@
 #include <vector>
 #include "../../analysis.hpp"
 #include "../extraction/explain.hpp"
+#include "../extraction/text.hpp"
+#include "../names/naming.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"
 #include "detail/values.hpp"
@@ -46,8 +48,7 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
   s += "rank " + std::to_string(a.rank) + "\n";
   if (a.deficiency.deficient) s += "  " + detail::explain_deficiency(a.rank, a.deficiency, form) + "\n";
   s += "dependent " + display_name(a.dependent, form) + "\n";
-  s += "repeating " + detail::comma_list(a.repeating, form) +
-       (a.repeating_given ? " (given)\n" : " (chosen automatically)\n");
+  s += "repeating " + detail::comma_list(a.repeating, form) + " (" + a.repeating_origin() + ")\n";
 
   const std::vector<std::optional<group_value>> values = detail::report_values(a, o);
   s += "groups (" + std::to_string(a.groups.size()) + ")\n";
@@ -56,6 +57,17 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
     s += "  " + label + " = " + a.groups[k].text(form) + detail::names_suffix(a.groups[k], form) + "\n";
     if (values[k])
       s += "  " + std::string(label.size() - (uni ? 1 : 0), ' ') + "   " + detail::value_sentence(*values[k]) + "\n";
+  }
+
+  if (a.form == basis::classical) {
+    // the same relation in named groups, when the catalog writes it differently
+    analysis named = a;
+    const std::vector<std::size_t> chosen = detail::rename_in_catalog_groups(named);
+    if (named.form == basis::named) {
+      detail::attach_matches(named, chosen);
+      const std::string line = relation(named, form);
+      if (!line.empty() && line != relation(a, form)) s += "in named groups: " + line + "\n";
+    }
   }
 
   if (a.isolated.empty()) {
@@ -70,6 +82,19 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
   for (const auto& note : a.notes)
     if (note != a.deficiency.explanation) s += "note: " + note + "\n";
   for (const auto& note : detail::regime_sentences(a, values, form)) s += "note: " + note + "\n";
+  if (o.alternatives) {
+    if (o.alternatives->empty())
+      s += "alternatives: none (no other admissible repeating variables)\n";
+    else
+      s += "alternatives (other admissible repeating variables, best first by the rule)\n";
+    for (std::size_t i = 0; i < o.alternatives->size(); ++i) {
+      const analysis& x = (*o.alternatives)[i];
+      s += "  " + std::to_string(i + 1) + ". repeating " + detail::comma_list(x.repeating, form) + "\n";
+      for (std::size_t k = 0; k < x.groups.size(); ++k)
+        s += "     " + std::string(uni ? "\u03a0" : "Pi") + std::to_string(k + 1) + " = " + x.groups[k].text(form) +
+             detail::names_suffix(x.groups[k], form) + "\n";
+    }
+  }
   return s;
 }
 

@@ -9,9 +9,11 @@
 /// variables (DESIGN.md, "Rules for the groups" and "Algorithms"), found by exact rational
 /// elimination during constant evaluation:
 ///  - the first variable is the dependent one;
-///  - repeating variables: the others, ordered by fewer base dimensions, then smaller sum of
-///    |exponents|, then input order; each one that raises the rank is taken; only if the
-///    rank is still short is the dependent variable taken too;
+///  - repeating variables: the others, ordered as an engineer considers them: a length, then
+///    a velocity, rotational speed or acceleration, then a density, then the rest by fewer
+///    base dimensions and smaller sum of |exponents|, surface tension, viscosity, expansion
+///    coefficients and pure numbers last; input order breaks ties; each one that raises the
+///    rank is taken; only if the rank is still short is the dependent variable taken too;
 ///  - group k holds exactly one non-repeating variable, with a positive exponent, times
 ///    powers of the repeating ones; exponents are primitive integers (gcd 1); groups are
 ///    ordered by the input position of their non-repeating variable;
@@ -66,9 +68,11 @@ consteval compile_time_basis<N> solve_pi_basis(const std::array<exponent_column,
     guarded_arithmetic g;
 
     // the candidates for repeating variables, in the order of the rule
+    std::array<int, N> tier{};
     std::array<std::size_t, N> bases{};
     std::array<rational, N> weight{};
     for (std::size_t j = 1; j < N; ++j) {  // the dependent variable is not ranked
+      tier[j] = repeating_tier_of(col[j]);
       bases[j] = nonzero_count(col[j]);
       for (const auto& e : col[j]) weight[j] = g.add(weight[j], g.abs(e));
     }
@@ -80,8 +84,12 @@ consteval compile_time_basis<N> solve_pi_basis(const std::array<exponent_column,
     std::size_t count = 0;
     for (std::size_t j = 1; j < N; ++j) {  // insertion keeps input order among equal keys
       std::size_t k = count;
-      while (k > 0 && (bases[j] < bases[order[k - 1]] ||
-                       (bases[j] == bases[order[k - 1]] && weight[j] < weight[order[k - 1]]))) {
+      const auto before = [&](std::size_t a, std::size_t b) {  // tier, base dimensions, exponents
+        if (tier[a] != tier[b]) return tier[a] < tier[b];
+        if (bases[a] != bases[b]) return bases[a] < bases[b];
+        return weight[a] < weight[b];
+      };
+      while (k > 0 && before(j, order[k - 1])) {
         order[k] = order[k - 1];
         --k;
       }

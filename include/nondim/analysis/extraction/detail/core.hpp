@@ -18,6 +18,7 @@
 #include "../../../solver/core/format.hpp"
 #include "../error.hpp"
 #include "../options.hpp"
+#include "../repeating_rule.hpp"
 #include "exact.hpp"
 
 namespace nondim::detail {
@@ -25,8 +26,8 @@ namespace nondim::detail {
 /// What the exact elimination yields; every number fits in 64 bits.
 struct exact_outcome {
   std::size_t rank = 0;
-  std::vector<std::size_t> repeating;             ///< input indices, in the order reported
-  std::vector<std::size_t> heads;                 ///< non-repeating variable of each group, ascending
+  std::vector<std::size_t> repeating;  ///< input indices, in the order reported
+  std::vector<std::size_t> heads;  ///< non-repeating variable of each group: the dependent one first, then ascending
   std::vector<std::vector<std::int64_t>> groups;  ///< aligned with `heads`, n entries each
   std::vector<dimension> spanning;                ///< primitive basis of the dimensions spanned
   bool spanning_too_large = false;                ///< that basis has exponents beyond 64 bits
@@ -75,10 +76,10 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
   exact_outcome out;
   out.multiprecision = !std::is_same_v<F, rational>;
 
-  // Column order: the given repeating variables first; or the candidates for the automatic
-  // choice (DESIGN.md: fewer base dimensions, smaller sum of |exponents|, input order) with
-  // the dependent variable last. The pivot columns of the reduced form are then exactly the
-  // greedy choice "take each that raises the rank", in that order.
+  // Column order: the given repeating variables first; or the candidates in the order of
+  // the rule (repeating_rule.hpp) with the dependent variable last. The pivot columns of
+  // the reduced form are then exactly the greedy choice "take each that raises the rank",
+  // in that order.
   std::vector<std::size_t> order;
   order.reserve(n);
   if (!given.empty()) {
@@ -86,23 +87,7 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     for (std::size_t j = 0; j < n; ++j)
       if (std::find(given.begin(), given.end(), j) == given.end()) order.push_back(j);
   } else {
-    std::vector<F> weight(n);
-    std::vector<std::size_t> bases(n);
-    for (std::size_t j = 0; j < n; ++j) {
-      bases[j] = dims[j].base_count();
-      F w = 0;
-      for (std::size_t i = 0; i < base_dimension_count; ++i) {
-        const F e = from_rational<F>(dims[j][i]);
-        w += is_negative(e) ? F(-e) : e;
-      }
-      weight[j] = w;
-    }
-    for (std::size_t j = 0; j < n; ++j)
-      if (j != dependent) order.push_back(j);
-    std::stable_sort(order.begin(), order.end(), [&](std::size_t a, std::size_t b) {
-      if (bases[a] != bases[b]) return bases[a] < bases[b];
-      return weight[a] < weight[b];  // stable: input order breaks ties
-    });
+    order = repeating_candidate_order(dims, dependent);
     order.push_back(dependent);
   }
 
@@ -162,6 +147,13 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
                            names[head]);
     }
     out.heads.push_back(head);
+  }
+  // DESIGN.md: the group of the dependent variable comes first
+  const auto dep = std::find(out.heads.begin(), out.heads.end(), dependent);
+  if (dep != out.heads.end()) {
+    const auto k = dep - out.heads.begin();
+    std::rotate(out.heads.begin(), dep, dep + 1);
+    std::rotate(out.groups.begin(), out.groups.begin() + k, out.groups.begin() + k + 1);
   }
 
   // The dimensions spanned: the reduced form of the transpose, whose rows are a basis of

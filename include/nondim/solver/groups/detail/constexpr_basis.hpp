@@ -173,6 +173,25 @@ struct span_builder {
   }
 };
 
+/// \brief The tier of a column in the rule for repeating variables (DESIGN.md, "Rules for
+/// the groups"): 0 a length; 1 a velocity, rotational speed or acceleration; 2 a density;
+/// 3 anything else; 4 surface tension, viscosity (dynamic or kinematic), an expansion
+/// coefficient or a pure number, taken only when nothing else closes the rank.
+constexpr int repeating_tier_of(const exponent_column& c) noexcept {
+  // exponents over L M T I Theta N J
+  const auto is = [&c](std::int64_t l, std::int64_t m, std::int64_t t, std::int64_t theta) {
+    const std::int64_t want[base_dimension_count] = {l, m, t, 0, theta, 0, 0};
+    for (std::size_t i = 0; i < base_dimension_count; ++i)
+      if (!(c[i] == rational{want[i]})) return false;
+    return true;
+  };
+  if (is(1, 0, 0, 0)) return 0;
+  if (is(1, 0, -1, 0) || is(0, 0, -1, 0) || is(1, 0, -2, 0)) return 1;
+  if (is(-3, 1, 0, 0)) return 2;
+  if (is(0, 0, 0, 0) || is(0, 1, -2, 0) || is(-1, 1, -1, 0) || is(2, 0, -1, 0) || is(0, 0, 0, -1)) return 4;
+  return 3;
+}
+
 /// Number of base dimensions with a non-zero exponent.
 constexpr std::size_t nonzero_count(const exponent_column& c) noexcept {
   std::size_t n = 0;
