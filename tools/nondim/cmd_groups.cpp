@@ -12,6 +12,7 @@
 #include <nondim/report.hpp>
 
 #include "commands.hpp"
+#include "kinds_text.hpp"
 #include "messages.hpp"
 #include "problem_input.hpp"
 #include "units_text.hpp"
@@ -27,6 +28,7 @@ struct groups_args {
   std::string basis;
   std::string format = "text";
   bool scales = false;
+  bool kinds = false;
 };
 }  // namespace
 
@@ -35,7 +37,8 @@ subcommand add_groups(CLI::App& app) {
   CLI::App* sub = app.add_subcommand("groups", "Find the dimensionless groups of a problem (Buckingham pi, exact)");
   sub->add_option("NAME=UNIT", args->variables,
                   "The variables, dependent one first unless --dependent says otherwise: F=N rho=kg/m^3 U=m/s D=m "
-                  "mu=Pa*s. 'NAME=VALUE UNIT' gives a value at a design point ('U=2 m/s'), 'NAME=VALUE±U UNIT' "
+                  "mu=Pa*s. NAME:KIND=UNIT declares what a variable is (lambda:mean_free_path=m; see --kinds). "
+                  "'NAME=VALUE UNIT' gives a value at a design point ('U=2 m/s'), 'NAME=VALUE±U UNIT' "
                   "or 'NAME=VALUE+-U UNIT' its standard uncertainty ('U=2+-0.05 m/s', 'U=2+-2.5% m/s'); every "
                   "group whose variables all have values is printed with its value");
   sub->add_option("-f,--file", args->file, "Read the problem from a TOML problem file instead");
@@ -53,6 +56,9 @@ subcommand add_groups(CLI::App& app) {
   sub->add_flag("-s,--scales", args->scales,
                 "Also print the reference scale of every variable in the repeating variables, the form a "
                 "nondimensional solver divides it by (t* = t·U/D)");
+  sub->add_flag("--kinds", args->kinds,
+                "List the kinds a variable can be declared (NAME:KIND=UNIT, or kind = \"KIND\" in a file) and the "
+                "conventional names that imply them, and exit");
   sub->footer(
       "Options given on the command line override those in the file.\n"
       "Examples:\n"
@@ -62,6 +68,10 @@ subcommand add_groups(CLI::App& app) {
       "  nondim groups --file pod.toml --scales");
   return {
       sub, [args](std::ostream& out) {
+        if (args->kinds) {
+          out << kinds_text();
+          return;
+        }
         if (!args->file.empty() && !args->variables.empty())
           throw input_error(with_prefix("give the variables either as NAME=UNIT arguments or with --file, not both"));
         problem_input in = args->file.empty() ? problem_from_arguments(args->variables) : problem_from_file(args->file);

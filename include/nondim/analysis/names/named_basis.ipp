@@ -161,7 +161,7 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
           rep += is_repeating.empty() || !is_repeating[var] ? 0U : 1U;
           v[var] = form.factors[f].exponent;
         }
-        if (conflict || unidentified) return;
+        if (conflict || unidentified || mixes_phases(form, variables, chosen.data())) return;
         named_candidate c;
         c.entry = sig.entry;
         c.form = sig.form;
