@@ -40,7 +40,7 @@ TEST_SUITE("report") {
     CHECK(latex_name("D_h") == "D_{h}");
     CHECK(latex_name("T_inf") == "T_{\\mathrm{inf}}");
     CHECK(latex_name("L1") == "L_{1}");
-    CHECK(latex_name("dp") == "\\Delta p");  // a pressure difference, common practice
+    CHECK(latex_name("dp") == "\\Delta p");         // a pressure difference, common practice
     CHECK(latex_name("rhoU") == "\\mathrm{rhoU}");  // not a Greek name followed by '_' or a digit
     CHECK(latex_name("a#b") == "\\mathrm{a\\#b}");  // special characters escaped
     CHECK(latex_name("x_{") == "x_{\\mathrm{\\{}}");

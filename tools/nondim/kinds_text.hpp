@@ -16,7 +16,7 @@ namespace nondim::tool {
 inline std::string kinds_text() {
   std::string out =
       "Kinds a variable can be declared with NAME:KIND=UNIT or kind = \"KIND\" in a problem file.\n"
-      "A variable whose name is listed has the kind without a declaration. Kinds marked * are\n"
+      "A variable whose name is listed has the kind without a declaration. Kinds marked * need\n"
       "evidence: a group is named after a number that needs one (Knudsen, Rossby, drag\n"
       "coefficient...) only when a variable's name or declared kind says so.\n\n";
   auto pad = [](std::string s, std::size_t width) {

@@ -6,10 +6,10 @@
 #include <array>
 #include <cstddef>
 #include <cstdint>
-#include <string_view>
 #include <cstdio>
 #include <ostream>
 #include <string>
+#include <string_view>
 #include <vector>
 #include "../../solver/core/detail/cat.hpp"
 #include "../../solver/core/dims.hpp"
@@ -82,8 +82,8 @@ inline std::string neutral_description(const pi_group& g, const std::vector<vari
   if (second == vars.size() || !(vars[first].dim == vars[second].dim)) return {};
   if (g.exponents[first] != -g.exponents[second] || vars[first].dim == dims::dimensionless) return {};
   const std::string_view plural = quantity_plural(vars[first].dim);
-  const std::string what = plural.empty() ? cat("quantities of dimension ", to_string(vars[first].dim, form))
-                                          : std::string(plural);
+  const std::string what =
+      plural.empty() ? cat("quantities of dimension ", to_string(vars[first].dim, form)) : std::string(plural);
   const std::int64_t e = g.exponents[first] < 0 ? -g.exponents[first] : g.exponents[first];
   return e == 1 ? cat(" (ratio of two ", what, ")") : cat(" (a power of the ratio of two ", what, ")");
 }

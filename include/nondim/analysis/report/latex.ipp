@@ -63,7 +63,9 @@ inline std::string_view leading_greek(std::string_view w) {
   return best;
 }
 
-inline bool is_ascii_letter(char c) { return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z'); }
+inline bool is_ascii_letter(char c) {
+  return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z');
+}
 
 /// A head written as several symbols run together, typeset as separate symbols with a thin
 /// space between them and the conventional spellings of the trade (common practice, no
@@ -101,7 +103,8 @@ inline std::string latex_compound(std::string_view head) {
       used = 1 + g.size();
       conventional = true;
     } else if (rest[0] == 'd' && rest.size() > 1 &&
-               ((rest[1] >= 'A' && rest[1] <= 'Z') || std::string_view("ptxyz").find(rest[1]) != std::string_view::npos)) {
+               ((rest[1] >= 'A' && rest[1] <= 'Z') ||
+                std::string_view("ptxyz").find(rest[1]) != std::string_view::npos)) {
       // dT, dp, dx: a difference; lower-case letters only where Δ is the usual reading (di, do stay)
       piece = "\\Delta " + std::string(1, rest[1]);
       used = 2;
