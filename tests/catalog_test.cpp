@@ -277,6 +277,14 @@ TEST_SUITE("catalog") {
           {"k_s", dims::thermal_conductivity, -1}}},
         // Incropera et al., ch. 5 (from memory): Fo = alpha t / L^2
         {"Fo", 1, {{"alpha", dims::thermal_diffusivity, 1}, {"t", dims::time, 1}, {"L", dims::length, -2}}},
+        // Incropera et al., ch. 5 (from memory): the same with alpha = k/(rho c_p), Fo = k t/(rho c_p L^2)
+        {"Fo",
+         1,
+         {{"k", dims::thermal_conductivity, 1},
+          {"t", dims::time, 1},
+          {"rho", dims::density, -1},
+          {"c_p", dims::specific_heat_capacity, -1},
+          {"L", dims::length, -2}}},
         // White, table 5.2 (from memory): Grashof beta dT g L^3 rho^2 / mu^2
         {"Gr",
          1,

@@ -72,6 +72,36 @@ TEST_SUITE("report") {
     CHECK(latex(c.groups[0]).find("(\\mathrm{UA}\\,\\Delta T)^{2}") != std::string::npos);
   }
 
+  TEST_CASE("the text view describes an unnamed ratio of one dimension neutrally") {
+    // White, Fluid Mechanics, ch. 10 (from memory): a sharp-crested weir, Q/(b sqrt(g) H^1.5)
+    // = f(P/H, b/H); P/H is no Knudsen number (DESIGN.md, "Rules for the groups")
+    problem p;
+    p.add("Q", "m^3/s").add("b", "m").add("H", "m").add("P", "m").add("g", "m/s^2");
+    options o;
+    o.repeating = {"H", "g"};
+    const std::string t = text_report(analyze(p, o));
+    CHECK(t.find("P\u00b7H\u207b\u00b9 (ratio of two lengths)") != std::string::npos);
+    CHECK(t.find("Kn") == std::string::npos);
+    // two densities: a ratio of two densities
+    problem q;
+    q.add("rho_p", "kg/m^3").add("rho", "kg/m^3");
+    CHECK(text_report(analyze(q)).find("(ratio of two densities)") != std::string::npos);
+  }
+
+  TEST_CASE("a group that mixes rad/s with rpm notes the hidden factor 2 pi") {
+    // ISO 80000-3: omega = 2 pi n; rpm is a rotational frequency (1/60 s^-1), rad/s an angular
+    // velocity; both are s^-1 to the dimensions
+    problem p;
+    p.add("n", "rpm").add("omega", "rad/s");
+    const std::string t = text_report(analyze(p));
+    CHECK(t.find("mixes") != std::string::npos);
+    CHECK(t.find("2\u03c0") != std::string::npos);
+    // the same family on both sides: no note
+    problem q;
+    q.add("n", "rpm").add("f", "Hz");
+    CHECK(text_report(analyze(q)).find("mixes") == std::string::npos);
+  }
+
   TEST_CASE("a group is a LaTeX fraction, non-repeating variable first") {
     const analysis a = drag();
     REQUIRE(a.groups.size() == 2);
