@@ -203,8 +203,9 @@ TEST_SUITE("catalog") {
           {"D", dims::length, rational{3, 2}},
           {"mu", dims::dynamic_viscosity, -1},
           {"R_c", dims::length, rational{-1, 2}}}},
-        // White, table 5.2 (from memory): Rossby V / (Omega L)
-        {"Ro", 1, {{"V", dims::velocity, 1}, {"Omega", dims::angular_velocity, -1}, {"L", dims::length, -1}}},
+        // White, table 5.2 (from memory): Rossby V / (Omega L), Omega the rotation rate of the
+        // Earth (a rotor's Omega makes the inverse tip-speed ratio instead; DESIGN.md)
+        {"Ro", 1, {{"V", dims::velocity, 1}, {"Omega_E", dims::angular_velocity, -1}, {"L", dims::length, -1}}},
         // common practice (from memory): Ekman nu / (Omega L^2)
         {"Ek",
          1,
@@ -276,6 +277,14 @@ TEST_SUITE("catalog") {
           {"k_s", dims::thermal_conductivity, -1}}},
         // Incropera et al., ch. 5 (from memory): Fo = alpha t / L^2
         {"Fo", 1, {{"alpha", dims::thermal_diffusivity, 1}, {"t", dims::time, 1}, {"L", dims::length, -2}}},
+        // Incropera et al., ch. 5 (from memory): the same with alpha = k/(rho c_p), Fo = k t/(rho c_p L^2)
+        {"Fo",
+         1,
+         {{"k", dims::thermal_conductivity, 1},
+          {"t", dims::time, 1},
+          {"rho", dims::density, -1},
+          {"c_p", dims::specific_heat_capacity, -1},
+          {"L", dims::length, -2}}},
         // White, table 5.2 (from memory): Grashof beta dT g L^3 rho^2 / mu^2
         {"Gr",
          1,
@@ -405,6 +414,25 @@ TEST_SUITE("catalog") {
           {"L", dims::length, 1},
           {"rho", dims::density, -1},
           {"U", dims::velocity, -1}}},
+        // Carlton, Marine Propellers and Propulsion, ch. 6 (from memory): K_T = T/(rho n^2 D^4),
+        // K_Q = Q/(rho n^2 D^5), J = V_A/(n D)
+        {"K_T",
+         1,
+         {{"T", dims::force, 1}, {"rho", dims::density, -1}, {"n", dims::frequency, -2}, {"D", dims::length, -4}}},
+        {"K_Q",
+         1,
+         {{"Q", dims::torque, 1}, {"rho", dims::density, -1}, {"n", dims::frequency, -2}, {"D", dims::length, -5}}},
+        {"J", 1, {{"V", dims::velocity, 1}, {"n", dims::frequency, -1}, {"D", dims::length, -1}}},
+        // Manwell, McGowan & Rogers, Wind Energy Explained, ch. 3 (from memory): lambda = Omega R / U
+        {"TSR", 1, {{"Omega", dims::angular_velocity, 1}, {"R", dims::length, 1}, {"U", dims::velocity, -1}}},
+        // White, ch. 5 (from memory): cavitation number (p_a - p_v)/(rho V^2/2), the margin one variable
+        {"Ca_v", 1, {{"dp_v", dims::pressure, 1}, {"rho", dims::density, -1}, {"V", dims::velocity, -2}}},
+        // Incropera et al., ch. 11 (from memory): eps = q/q_max, NTU = UA/C_min, C_r = C_min/C_max
+        {"eps_HX", 1, {{"q", dims::power, 1}, {"q_max", dims::power, -1}}},
+        {"NTU", 1, {{"UA", dims::heat_capacity, 1}, {"C_min", dims::heat_capacity, -1}}},
+        {"C_r", 1, {{"C_min", dims::heat_capacity, 1}, {"C_max", dims::heat_capacity, -1}}},
+        // Incropera et al., ch. 8 (from memory): the Sieder-Tate factor (mu/mu_s)^0.14
+        {"mu/mu_w", 1, {{"mu", dims::dynamic_viscosity, 1}, {"mu_s", dims::dynamic_viscosity, -1}}},
     };
     std::set<std::string> covered;
     for (const auto& r : rows) {

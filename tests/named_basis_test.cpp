@@ -730,6 +730,68 @@ TEST_SUITE("named basis through analyze()") {
     CHECK((lists(a, "Oh") || lists(a, "Mo")));
   }
 
+  TEST_CASE("a spray: Weber and Ohnesorge numbers of one phase, the density ratio explicit") {
+    // Lefebvre & McDonell, Atomization and Sprays, ch. 2 and 6 (from memory): the drop size of a
+    // liquid sheet or jet in a gas, d32/D = f(We, Oh, rho_g/rho_l). Oh = mu_l/sqrt(rho_l sigma D)
+    // is defined with the liquid's density; the gas density enters through the density ratio
+    // (or a gas Weber number), never next to the liquid's viscosity in one Ohnesorge number
+    problem p;
+    p.add("d32", "um")
+        .add("D", "mm")
+        .add("U", "m/s")
+        .add("rho_l", "kg/m^3")
+        .add("rho_g", "kg/m^3")
+        .add("mu_l", "Pa*s")
+        .add("sigma", "N/m");
+    for (const auto& repeating : {std::vector<std::string>{"D", "U", "rho_g"}, std::vector<std::string>{}}) {
+      options o;
+      o.form = basis::named;
+      o.repeating = repeating;
+      const analysis a = analyze(p, o);
+      REQUIRE(a.groups.size() == 4);
+      // the drop size over the nozzle diameter is no Knudsen number (DESIGN.md, "Rules for the groups")
+      CHECK(a.groups.front().matches.empty());
+      for (const auto& g : a.groups) {
+        if (g.matches.empty()) continue;
+        const bool liquid = g.exponent("mu_l") != rational{0} || g.exponent("rho_l") != rational{0};
+        const bool gas = g.exponent("rho_g") != rational{0};
+        INFO(g.text(text_form::ascii));
+        CHECK_FALSE((liquid && gas));
+      }
+      const bool ratio = std::any_of(a.groups.begin(), a.groups.end(), [](const pi_group& g) {
+        return g.exponent("rho_l") != rational{0} && g.exponent("rho_g") == -g.exponent("rho_l") &&
+               g.exponent("U") == rational{0} && g.exponent("mu_l") == rational{0};
+      });
+      CHECK(ratio);
+    }
+  }
+
+  TEST_CASE("a declared kind is evidence for a name, and is checked") {
+    // White, Fluid Mechanics, ch. 1 (from memory): Kn = lambda/L; a mean free path called l_gas
+    // is one only when declared
+    problem p;
+    p.add("l_gas", "nm").add("L", "um");
+    analysis a = analyze(p);
+    REQUIRE(a.groups.size() == 1);
+    CHECK(a.groups[0].matches.empty());
+    p.declare_kind("l_gas", "mean_free_path");
+    a = analyze(p);
+    REQUIRE(a.groups[0].matches.size() == 1);
+    CHECK(a.groups[0].matches[0].symbol == "Kn");
+    // the spelled-out name is accepted too
+    problem q;
+    q.add("l_gas", "nm").add("L", "um").declare_kind("l_gas", "mean free path");
+    CHECK(analyze(q).groups[0].matches.at(0).symbol == "Kn");
+    // a kind the catalog does not know, or of another dimension, is refused with the variable's name
+    problem unknown;
+    unknown.add("l_gas", "nm").add("L", "um").declare_kind("l_gas", "mean_free_paths");
+    CHECK_THROWS_WITH_AS(analyze(unknown), doctest::Contains("'l_gas'"), analysis_error);
+    problem wrong;
+    wrong.add("l_gas", "nm").add("L", "um").declare_kind("l_gas", "density");
+    CHECK_THROWS_WITH_AS(analyze(wrong), doctest::Contains("dimension"), analysis_error);
+    CHECK_THROWS_AS(problem{}.declare_kind("x", "density"), analysis_error);
+  }
+
   TEST_CASE("a heated plate transient: theta/theta_i, Bi, Fo, x/L") {
     // Incropera et al., ch. 5 (from memory): theta/theta_i = f(x/L, Bi, Fo)
     problem p;

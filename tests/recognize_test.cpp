@@ -5,6 +5,7 @@
 
 #include <doctest/doctest.h>
 
+#include <array>
 #include <cstdint>
 #include <limits>
 #include <stdexcept>
@@ -197,10 +198,13 @@ TEST_SUITE("recognize") {
 
   TEST_CASE("Strouhal and Damkoehler numbers share a form and are told apart by the names") {
     // White, table 5.2: St = omega L/V; common practice: Da = k_r L/U (from memory); a rotation
-    // rate has the same dimension, so f D/U is also an inverse Rossby number U/(Omega L)
+    // rate has the same dimension, so f D/U is also an inverse Rossby number U/(Omega L), a
+    // tip-speed ratio Omega R/U and an advance ratio J = V/(n D) (Carlton, ch. 6, from memory)
     std::vector<group_variable> v{{"f", dims::frequency}, {"D", dims::length}, {"U", dims::velocity}};
     auto ms = recognize(v, exps{1, 1, -1});
-    REQUIRE(ms.size() == 3);
+    REQUIRE(ms.size() == 5);
+    CHECK_FALSE(find(ms, "J")->consistent);
+    CHECK_FALSE(find(ms, "TSR")->consistent);
     CHECK(ms[0].info().symbol == "Sr");
     CHECK(ms[0].consistent);
     REQUIRE(find(ms, "Ro") != nullptr);
@@ -211,10 +215,108 @@ TEST_SUITE("recognize") {
     ms = recognize(v, exps{1, 1, -1});
     CHECK(ms[0].info().symbol == "Da");
     CHECK_FALSE(find(ms, "Sr")->consistent);
-    v[0].name = "Omega";
+    v[0].name = "Omega_E";  // the rotation rate of the Earth
     ms = recognize(v, exps{-1, -1, 1});
     CHECK(ms[0].info().symbol == "Ro");
     CHECK(ms[0].power == rational{1});
+    CHECK(ms[0].consistent);
+  }
+
+  TEST_CASE("a rotor's tip-speed ratio is no Rossby number") {
+    // Manwell, McGowan & Rogers, Wind Energy Explained, ch. 3 (from memory): lambda = Omega R/U
+    // of a wind turbine; the Rossby number U/(Omega L) needs the rotation rate of the frame
+    // (DESIGN.md, "Rules for the groups"), which neither the name nor a declared kind gives here
+    std::vector<group_variable> v{{"Omega", dims::angular_velocity}, {"R", dims::length}, {"U", dims::velocity}};
+    auto ms = recognize(v, exps{1, 1, -1});
+    REQUIRE(!ms.empty());
+    CHECK(ms[0].info().symbol == "TSR");
+    CHECK(ms[0].consistent);
+    REQUIRE(find(ms, "Ro") != nullptr);
+    CHECK_FALSE(find(ms, "Ro")->consistent);
+    // a declared kind is evidence: the same group over the rotation rate of the frame is Ro^-1
+    v[0].kind = quantity_kind::rotation_rate;
+    ms = recognize(v, exps{1, 1, -1});
+    CHECK(ms[0].info().symbol == "Ro");
+    CHECK(ms[0].power == rational{-1});
+    CHECK(ms[0].consistent);
+  }
+
+  TEST_CASE("a ratio of two lengths is a Knudsen number only when one is a mean free path") {
+    // Weir height over head P/H (White, Fluid Mechanics, ch. 10, sharp-crested weirs, from
+    // memory), depth ratio y2/y1 of a hydraulic jump (White, ch. 10, from memory), drop size over
+    // nozzle diameter d32/D (common practice for sprays, no source) and an aspect ratio b/c:
+    // none is Kn = lambda/L (White, ch. 1, from memory)
+    const std::array<std::array<std::string_view, 2>, 4> pairs{{{"P", "H"}, {"y2", "y1"}, {"d32", "D"}, {"b", "c"}}};
+    for (const auto& p : pairs) {
+      INFO(p[0], "/", p[1]);
+      const std::vector<group_variable> v{{p[0], dims::length}, {p[1], dims::length}};
+      const auto ms = recognize(v, exps{1, -1});
+      for (const auto& m : ms) CHECK_FALSE(m.consistent);
+    }
+    // the name or a declared kind is evidence
+    std::vector<group_variable> v{{"lambda", dims::length}, {"L", dims::length}};
+    auto ms = recognize(v, exps{1, -1});
+    REQUIRE(!ms.empty());
+    CHECK(ms[0].info().symbol == "Kn");
+    CHECK(ms[0].consistent);
+    v[0] = {"l_gas", dims::length, quantity_kind::mean_free_path};
+    ms = recognize(v, exps{1, -1});
+    REQUIRE(!ms.empty());
+    CHECK(ms[0].info().symbol == "Kn");
+    CHECK(ms[0].consistent);
+  }
+
+  TEST_CASE("a propeller's thrust loading is no drag coefficient") {
+    // Carlton, Marine Propellers and Propulsion, ch. 6 (from memory): the thrust loading
+    // T/(rho V^2 D^2) of a propeller has the form of the force coefficient F/(rho U^2 L^2) but T
+    // is a thrust, not a drag; the thrust coefficient is K_T = T/(rho n^2 D^4)
+    const std::vector<group_variable> v{
+        {"T", dims::force}, {"rho", dims::density}, {"V", dims::velocity}, {"D", dims::length}, {"n", dims::frequency}};
+    auto ms = recognize(v, exps{1, -1, -2, -2, 0});
+    for (const auto& m : ms) CHECK_FALSE(m.consistent);
+    REQUIRE(find(ms, "C_D") != nullptr);
+    ms = recognize(v, exps{1, -1, 0, -4, -2});
+    REQUIRE(!ms.empty());
+    CHECK(ms[0].info().symbol == "K_T");
+    CHECK(ms[0].consistent);
+    // a drag named as such keeps its name (White, table 5.2, from memory)
+    const std::vector<group_variable> drag{
+        {"F_D", dims::force}, {"rho", dims::density}, {"V", dims::velocity}, {"D", dims::length}};
+    ms = recognize(drag, exps{1, -1, -2, -2});
+    REQUIRE(!ms.empty());
+    CHECK(ms[0].info().symbol == "C_D");
+    CHECK(ms[0].consistent);
+  }
+
+  TEST_CASE("a buoyancy group given as one variable is no Galilei number") {
+    // natural convection, Gr = g beta dT L^3/nu^2 (Incropera et al., ch. 9, from memory) with
+    // g beta dT given as one acceleration gbdT: not Ga = g L^3/nu^2 (ISO 80000-11, from memory)
+    std::vector<group_variable> v{{"gbdT", dims::acceleration}, {"L", dims::length}, {"nu", dims::kinematic_viscosity}};
+    auto ms = recognize(v, exps{1, 3, -2});
+    for (const auto& m : ms) CHECK_FALSE(m.consistent);
+    REQUIRE(find(ms, "Ga") != nullptr);
+    v[0].name = "g";
+    ms = recognize(v, exps{1, 3, -2});
+    REQUIRE(!ms.empty());
+    CHECK(ms[0].info().symbol == "Ga");
+    CHECK(ms[0].consistent);
+  }
+
+  TEST_CASE("an entry defined for one phase does not take variables of two") {
+    // Ohnesorge number Oh = mu/sqrt(rho sigma L) of a liquid jet (common practice, drop and
+    // jet break-up, from memory): mu and rho of the liquid; with the gas density it is no Oh
+    std::vector<group_variable> v{{"mu_l", dims::dynamic_viscosity},
+                                  {"rho_g", dims::density},
+                                  {"sigma", dims::surface_tension},
+                                  {"D", dims::length}};
+    auto ms = recognize(v, exps{2, -1, -1, -1});
+    REQUIRE(find(ms, "Oh") != nullptr);
+    CHECK_FALSE(find(ms, "Oh")->consistent);
+    v[1].name = "rho_l";
+    ms = recognize(v, exps{2, -1, -1, -1});
+    REQUIRE(!ms.empty());
+    CHECK(ms[0].info().symbol == "Oh");
+    CHECK(ms[0].consistent);
   }
 
   TEST_CASE("a name suffix keeps the base name's kind") {

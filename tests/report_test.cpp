@@ -40,10 +40,66 @@ TEST_SUITE("report") {
     CHECK(latex_name("D_h") == "D_{h}");
     CHECK(latex_name("T_inf") == "T_{\\mathrm{inf}}");
     CHECK(latex_name("L1") == "L_{1}");
-    CHECK(latex_name("dp") == "\\mathrm{dp}");
+    CHECK(latex_name("dp") == "\\Delta p");         // a pressure difference, common practice
     CHECK(latex_name("rhoU") == "\\mathrm{rhoU}");  // not a Greek name followed by '_' or a digit
     CHECK(latex_name("a#b") == "\\mathrm{a\\#b}");  // special characters escaped
     CHECK(latex_name("x_{") == "x_{\\mathrm{\\{}}");
+  }
+
+  TEST_CASE("symbols run together in one name are separated and conventional spellings typeset") {
+    // common practice, no source: the heat rate of an exchanger UA dT_max (Incropera et al.,
+    // ch. 11, eps-NTU method, from memory) given as one variable; a buoyancy product
+    // drho d^2 g given as one variable (Clift, Grace & Weber's Eotvos number, from memory)
+    CHECK(latex_name("UAdT_max") == "\\mathrm{UA}\\,\\Delta T_{\\max}");
+    CHECK(latex_name("drhod\u00b2g") == "\\Delta\\rho\\,d^{2}\\,g");
+    CHECK(latex_name("drho") == "\\Delta\\rho");
+    CHECK(latex_name("mdot") == "\\dot{m}");
+    CHECK(latex_name("m_dot") == "\\dot{m}");
+    CHECK(latex_name("gbdT") == "g\\,b\\,\\Delta T");
+    CHECK(latex_name("T_min") == "T_{\\min}");
+    // words with no conventional piece stay one upright word; an inner diameter di stays
+    CHECK(latex_name("time") == "\\mathrm{time}");
+    CHECK(latex_name("di") == "\\mathrm{di}");
+    CHECK(latex_name("cp") == "\\mathrm{cp}");
+    // raised as a whole: (Delta p)^2, not Delta (p^2)
+    const analysis a = analyze(problem{}.add("dp", dims::pressure).add("rho", dims::density).add("U", dims::velocity));
+    CHECK(latex(a.groups[0]) == "\\frac{\\Delta p}{\\rho U^{2}}");
+    const analysis b = analyze(problem{}.add("rho", dims::density).add("dp", dims::pressure).add("U", dims::velocity));
+    CHECK(latex(b.groups[0]) == "\\frac{\\rho U^{2}}{\\Delta p}");
+    const analysis c =
+        analyze(problem{}.add("q", dims::power * dims::power).add("UAdT", dims::power).add("F", dims::force));
+    REQUIRE(!c.groups.empty());
+    CHECK(latex(c.groups[0]).find("(\\mathrm{UA}\\,\\Delta T)^{2}") != std::string::npos);
+  }
+
+  TEST_CASE("the text view describes an unnamed ratio of one dimension neutrally") {
+    // White, Fluid Mechanics, ch. 10 (from memory): a sharp-crested weir, Q/(b sqrt(g) H^1.5)
+    // = f(P/H, b/H); P/H is no Knudsen number (DESIGN.md, "Rules for the groups")
+    problem p;
+    p.add("Q", "m^3/s").add("b", "m").add("H", "m").add("P", "m").add("g", "m/s^2");
+    options o;
+    o.repeating = {"H", "g"};
+    const std::string t = text_report(analyze(p, o));
+    CHECK(t.find("P\u00b7H\u207b\u00b9 (ratio of two lengths)") != std::string::npos);
+    CHECK(t.find("Kn") == std::string::npos);
+    // two densities: a ratio of two densities
+    problem q;
+    q.add("rho_p", "kg/m^3").add("rho", "kg/m^3");
+    CHECK(text_report(analyze(q)).find("(ratio of two densities)") != std::string::npos);
+  }
+
+  TEST_CASE("a group that mixes rad/s with rpm notes the hidden factor 2 pi") {
+    // ISO 80000-3: omega = 2 pi n; rpm is a rotational frequency (1/60 s^-1), rad/s an angular
+    // velocity; both are s^-1 to the dimensions
+    problem p;
+    p.add("n", "rpm").add("omega", "rad/s");
+    const std::string t = text_report(analyze(p));
+    CHECK(t.find("mixes") != std::string::npos);
+    CHECK(t.find("2\u03c0") != std::string::npos);
+    // the same family on both sides: no note
+    problem q;
+    q.add("n", "rpm").add("f", "Hz");
+    CHECK(text_report(analyze(q)).find("mixes") == std::string::npos);
   }
 
   TEST_CASE("a group is a LaTeX fraction, non-repeating variable first") {

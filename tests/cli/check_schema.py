@@ -7,6 +7,7 @@ n - rank, and `rank` must be the rank of the dimension matrix computed independe
 sympy (python3-sympy).
 """
 import json
+import re
 import math
 import sys
 from fractions import Fraction
@@ -81,9 +82,13 @@ def check_groups(v, problems):
     names, dims = [], {}
     for i, var in enumerate(v["variables"]):
         w = "variables[%d]" % i
-        if keys(var, w, ["name", "unit", "dimension"], [], problems):
+        if keys(var, w, ["name", "unit", "dimension"], ["kind"], problems):
             if not isinstance(var.get("name"), str) or not isinstance(var.get("unit"), str):
                 problems.append("%s: name and unit must be strings" % w)
+            # a declared kind is an identifier of the catalog's kinds (mean_free_path)
+            if "kind" in var and not (isinstance(var["kind"], str) and
+                                      re.fullmatch(r"[a-z][a-z_]*", var["kind"])):
+                problems.append("%s: kind must be an identifier such as mean_free_path" % w)
             names.append(var.get("name"))
             dims[var.get("name")] = dimension(var.get("dimension", {}), w + ".dimension", problems)
     rank = v["rank"]

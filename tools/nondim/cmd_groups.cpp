@@ -12,6 +12,7 @@
 #include <nondim/report.hpp>
 
 #include "commands.hpp"
+#include "kinds_text.hpp"
 #include "messages.hpp"
 #include "problem_input.hpp"
 #include "units_text.hpp"
@@ -28,6 +29,7 @@ struct groups_args {
   std::string format = "text";
   bool scales = false;
   bool alternatives = false;
+  bool kinds = false;
 };
 }  // namespace
 
@@ -36,7 +38,8 @@ subcommand add_groups(CLI::App& app) {
   CLI::App* sub = app.add_subcommand("groups", "Find the dimensionless groups of a problem (Buckingham pi, exact)");
   sub->add_option("NAME=UNIT", args->variables,
                   "The variables, dependent one first unless --dependent says otherwise: F=N rho=kg/m^3 U=m/s D=m "
-                  "mu=Pa*s. 'NAME=VALUE UNIT' gives a value at a design point ('U=2 m/s'), 'NAME=VALUE±U UNIT' "
+                  "mu=Pa*s. NAME:KIND=UNIT declares what a variable is (lambda:mean_free_path=m; see --kinds). "
+                  "'NAME=VALUE UNIT' gives a value at a design point ('U=2 m/s'), 'NAME=VALUE±U UNIT' "
                   "or 'NAME=VALUE+-U UNIT' its standard uncertainty ('U=2+-0.05 m/s', 'U=2+-2.5% m/s'); every "
                   "group whose variables all have values is printed with its value");
   sub->add_option("-f,--file", args->file, "Read the problem from a TOML problem file instead");
@@ -58,6 +61,9 @@ subcommand add_groups(CLI::App& app) {
                 "Also list the other admissible sets of repeating variables with their groups, best first by the "
                 "rule (at most " +
                     std::to_string(default_alternative_count) + ")");
+  sub->add_flag("--kinds", args->kinds,
+                "List the kinds a variable can be declared (NAME:KIND=UNIT, or kind = \"KIND\" in a file) and the "
+                "conventional names that imply them, and exit");
   sub->footer(
       "Options given on the command line override those in the file.\n"
       "Examples:\n"
@@ -68,6 +74,10 @@ subcommand add_groups(CLI::App& app) {
       "  nondim groups --file pod.toml --alternatives");
   return {
       sub, [args](std::ostream& out) {
+        if (args->kinds) {
+          out << kinds_text();
+          return;
+        }
         if (!args->file.empty() && !args->variables.empty())
           throw input_error(with_prefix("give the variables either as NAME=UNIT arguments or with --file, not both"));
         problem_input in = args->file.empty() ? problem_from_arguments(args->variables) : problem_from_file(args->file);

@@ -15,6 +15,7 @@
 #define TOML_HEADER_ONLY 1
 #include <toml++/toml.h>
 
+#include <nondim/analysis/names/quantity_kind.hpp>
 #include <nondim/solver/parse/detail/text.hpp>
 
 #include "messages.hpp"
@@ -259,6 +260,12 @@ void read_variable(const checker& c, const toml::table& t, std::size_t index, pr
       has_unit = true;
     } else if (k == "note") {
       v.note = c.string_value(node, "'note' of " + label);
+    } else if (k == "kind") {
+      v.kind = c.string_value(node, "'kind' of " + label);
+      v.kind_where = position_of(node.source());
+      if (kind_from_key(v.kind) == quantity_kind::unspecified)
+        c.fail(node.source(), "'kind' of " + label + ": '" + v.kind +
+                                  "' is not a kind of the catalog (nondim groups --kinds lists them)");
     } else if (k == "prototype") {
       v.prototype = c.number_value(node, "'prototype' of " + label);
     } else if (k == "model") {
@@ -276,8 +283,9 @@ void read_variable(const checker& c, const toml::table& t, std::size_t index, pr
                                   std::string(type_name(node)));
       (k == "value" ? v.value : v.uncertainty) = std::move(q);
     } else {
-      c.fail(key.source(), "unknown key '" + std::string(k) + "' in " + label +
-                               " (a [[variable]] table takes name, unit, note, value, uncertainty, prototype, model)");
+      c.fail(key.source(),
+             "unknown key '" + std::string(k) + "' in " + label +
+                 " (a [[variable]] table takes name, unit, note, kind, value, uncertainty, prototype, model)");
     }
   }
   if (!has_name) c.fail(t.source(), label + " has no 'name'");

@@ -33,6 +33,8 @@ struct file_variable {
   std::string name;
   std::string unit;
   std::string note;
+  std::string kind;                          ///< declared kind ("mean_free_path"), empty when absent
+  file_position kind_where;                  ///< the kind's value
   std::optional<double> prototype;           ///< in the variable's own unit
   std::optional<double> model;               ///< in the variable's own unit; absent = to be found
   std::optional<file_quantity> value;        ///< the design point

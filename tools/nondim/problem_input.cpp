@@ -6,6 +6,7 @@
 #include <string_view>
 #include <utility>
 
+#include <nondim/analysis/names/quantity_kind.hpp>
 #include <nondim/data.hpp>
 #include <nondim/parse.hpp>
 
@@ -53,6 +54,23 @@ void add_variable(nondim::problem& p, const std::string& name, const std::string
   } catch (const analysis_error& e) {
     throw input_error(with_prefix(where + std::string(bare_message(e))));
   }
+}
+
+/// Declares `kind` for the variable just added to `p`, refusing a kind of the catalog whose
+/// dimension is not the variable's (`where` ends in ": ").
+void declare_kind(nondim::problem& p, const std::string& kind, const std::string& where) {
+  if (kind.empty()) return;
+  const variable& var = p[p.size() - 1];
+  const quantity_kind k = kind_from_key(kind);
+  if (k == quantity_kind::unspecified)
+    throw input_error(with_prefix(where + "variable '" + var.name + "': '" + kind +
+                                  "' is not a kind of the catalog (nondim groups --kinds lists them)"));
+  if (kind_info(k).dim != var.dim)
+    throw input_error(with_prefix(where + "variable '" + var.name + "' is declared a " +
+                                  std::string(kind_info(k).name) + " (" +
+                                  si_unit_string(kind_info(k).dim, text_form::ascii) + "), but its unit " + var.unit +
+                                  " has the dimension of " + si_unit_string(var.dim, text_form::ascii)));
+  p.declare_kind(var.name, kind);
 }
 
 /// A number and unit read from a problem-file string: the unit's factor and offset, or the
@@ -151,7 +169,15 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
     if (eq == std::string::npos)
       throw input_error(
           with_prefix(where + " is not NAME=UNIT (write, for example, rho=kg/m^3; U=1 for a pure number)"));
-    const std::string name = a.substr(0, eq);
+    std::string name = a.substr(0, eq);
+    std::string kind;  // NAME:KIND=UNIT declares a kind
+    if (const auto colon = name.find(':'); colon != std::string::npos) {
+      kind = name.substr(colon + 1);
+      name.erase(colon);
+      if (kind.empty())
+        throw input_error(
+            with_prefix(where + ": an empty kind after ':' (write, for example, lambda:mean_free_path=m)"));
+    }
     std::string unit = a.substr(eq + 1);
     std::optional<value_text> value;
     try {
@@ -178,6 +204,7 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
       throw input_error(m);
     }
     add_variable(in.problem, name, unit, where + ": ");
+    declare_kind(in.problem, kind, where + ": ");
     in.report.notes.emplace_back();
     if (value) {
       const variable& var = in.problem[in.problem.size() - 1];
@@ -213,6 +240,7 @@ problem_input problem_from_loaded(problem_file loaded) {
       bad_file_unit(f, v, e);
     }
     add_variable(in.problem, v.name, v.unit, line);
+    declare_kind(in.problem, v.kind, f.at(v.kind_where));
     in.report.notes.push_back(v.note);
     if (v.value) {
       const variable& var = in.problem[in.problem.size() - 1];

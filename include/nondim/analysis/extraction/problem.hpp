@@ -31,6 +31,9 @@ struct variable {
   std::string unit;     ///< the unit text as given (or the coherent SI unit)
   double factor = 1.0;  ///< SI value of one `unit`
   double offset = 0.0;  ///< affine zero (degC, degF standing alone); 0 otherwise
+  /// The declared kind ("mean_free_path", see names/quantity_kind.hpp), or empty: names of
+  /// groups that need a specific kind of variable rely on it.
+  std::string kind;
 
   friend bool operator==(const variable&, const variable&) = default;
 };
@@ -52,7 +55,7 @@ class problem {
   problem& add(std::string name, dimension d) {
     check_name(name);
     std::string unit = si_unit_string(d, text_form::ascii);
-    variables_.push_back(variable{std::move(name), d, std::move(unit), 1.0, 0.0});
+    variables_.push_back(variable{std::move(name), d, std::move(unit), 1.0, 0.0, {}});
     return *this;
   }
 
@@ -75,7 +78,19 @@ class problem {
           detail::cat("nondim: variable '", name, "' has a unit that cannot be read ('", unit_text, "'): ", why), name,
           e.column()));
     }
-    variables_.push_back(variable{std::move(name), u.dim, std::string(unit_text), u.factor, u.offset});
+    variables_.push_back(variable{std::move(name), u.dim, std::string(unit_text), u.factor, u.offset, {}});
+    return *this;
+  }
+
+  /// \brief Declares what the variable called `name` is (`kind`: an identifier or name of
+  /// `quantity_kinds`, such as "mean_free_path"); recognition takes it as evidence. The kind
+  /// is checked against the catalog and the variable's dimension when the problem is analysed.
+  /// \throws analysis_error when there is no variable called `name`.
+  problem& declare_kind(std::string_view name, std::string kind) {
+    const auto i = index_of(name);
+    if (!i)
+      throw analysis_error(detail::cat("nondim: no variable '", name, "' to declare a kind for"), std::string(name));
+    variables_[*i].kind = std::move(kind);
     return *this;
   }
 

@@ -3,12 +3,16 @@
 // (<nondim/implementation.ipp>), inline otherwise.
 
 #include <algorithm>
+#include <array>
 #include <cstddef>
+#include <cstdint>
 #include <cstdio>
 #include <ostream>
 #include <string>
+#include <string_view>
 #include <vector>
 #include "../../solver/core/detail/cat.hpp"
+#include "../../solver/core/dims.hpp"
 #include "../../solver/core/format.hpp"
 #include "analyze.hpp"
 #include "explain.hpp"
@@ -31,10 +35,64 @@ inline std::string short_double(double v) {
   return buf;
 }
 
+/// "lengths", "velocities": the plural of the quantity a dimension is most often, or empty.
+inline std::string_view quantity_plural(const dimension& d) {
+  struct entry {
+    dimension dim;
+    std::string_view plural;
+  };
+  static constexpr std::array<entry, 17> table{{{dims::length, "lengths"},
+                                                {dims::velocity, "velocities"},
+                                                {dims::time, "times"},
+                                                {dims::mass, "masses"},
+                                                {dims::temperature, "temperatures"},
+                                                {dims::density, "densities"},
+                                                {dims::pressure, "pressures or stresses"},
+                                                {dims::dynamic_viscosity, "dynamic viscosities"},
+                                                {dims::kinematic_viscosity, "diffusivities or kinematic viscosities"},
+                                                {dims::force, "forces"},
+                                                {dims::power, "powers or heat rates"},
+                                                {dims::energy, "energies or torques"},
+                                                {dims::area, "areas"},
+                                                {dims::volume, "volumes"},
+                                                {dims::frequency, "rates or frequencies"},
+                                                {dims::acceleration, "accelerations"},
+                                                {dims::volume_flow_rate, "volume flow rates"}}};
+  for (const auto& e : table)
+    if (e.dim == d) return e.plural;
+  return {};
+}
+
+/// " (ratio of two lengths)" for a group of two variables of one dimension that no catalog
+/// entry names (DESIGN.md, "Rules for the groups": a neutral description where the
+/// evidence for a name is missing); empty otherwise.
+inline std::string neutral_description(const pi_group& g, const std::vector<variable>& vars, text_form form) {
+  if (!g.matches.empty() || g.exponents.size() != vars.size()) return {};
+  std::size_t first = vars.size();
+  std::size_t second = vars.size();
+  for (std::size_t i = 0; i < g.exponents.size(); ++i) {
+    if (g.exponents[i] == 0) continue;
+    if (first == vars.size())
+      first = i;
+    else if (second == vars.size())
+      second = i;
+    else
+      return {};
+  }
+  if (second == vars.size() || !(vars[first].dim == vars[second].dim)) return {};
+  if (g.exponents[first] != -g.exponents[second] || vars[first].dim == dims::dimensionless) return {};
+  const std::string_view plural = quantity_plural(vars[first].dim);
+  const std::string what =
+      plural.empty() ? cat("quantities of dimension ", to_string(vars[first].dim, form)) : std::string(plural);
+  const std::int64_t e = g.exponents[first] < 0 ? -g.exponents[first] : g.exponents[first];
+  return e == 1 ? cat(" (ratio of two ", what, ")") : cat(" (a power of the ratio of two ", what, ")");
+}
+
 /// " = Re⁻¹ (Reynolds number)" for the best match; other entries of the same form follow
 /// as "; same form: C_L (lift coefficient)", not chained with "=": Nu and Bi share a form
-/// but are not equal.
-inline std::string names_suffix(const pi_group& g, text_form form) {
+/// but are not equal. Without a match, the neutral description when `vars` is given.
+inline std::string names_suffix(const pi_group& g, text_form form, const std::vector<variable>* vars = nullptr) {
+  if (g.matches.empty() && vars != nullptr) return neutral_description(g, *vars, form);
   std::string s;
   for (std::size_t k = 0; k < g.matches.size(); ++k) {
     const auto& m = g.matches[k];
@@ -126,7 +184,7 @@ NONDIM_ANALYSIS_INLINE std::string to_string(const analysis& a, text_form form) 
   s.append(cat("groups (", std::to_string(a.groups.size()), ")\n"));
   for (std::size_t k = 0; k < a.groups.size(); ++k)
     s.append(cat("  ", uni ? "\u03c0" : "pi", std::to_string(k + 1), " = ", a.groups[k].text(form),
-                 detail::names_suffix(a.groups[k], form), "\n"));
+                 detail::names_suffix(a.groups[k], form, &a.variables), "\n"));
 
   if (a.isolated.empty()) {
     s.append("isolated: none\n");

@@ -11,7 +11,8 @@
 ///  1. Candidates: every mapping of the factors of every catalog form onto distinct problem
 ///     variables of equal dimensions whose product lies in the span of the given groups
 ///     (always, when the given groups span the whole null space), in which no variable
-///     contradicts its factor (see recognize.hpp for what contradicts), and in which every
+///     contradicts its factor (see recognize.hpp for what contradicts: a kind that needs
+///     evidence without it, two phases in an entry defined for one), and in which every
 ///     variable on a factor that shares its dimension with another factor of the form is
 ///     identified by its name or hint (lambda/L is a Knudsen number, a ratio of two lengths
 ///     with neutral names is not). Each becomes a primitive integer exponent vector
@@ -21,7 +22,10 @@
 ///     group, unchanged; otherwise the first candidate containing the dependent variable, in
 ///     the order below; if there is none, the first given group containing it, unchanged.
 ///  3. The others, without the dependent variable, taken greedily while the exact rank of
-///     the chosen set rises, in this order: tier-1 catalog numbers; given groups of at most
+///     the chosen set rises, in this order: ratios of one property of two phases (two
+///     variables of one dimension whose names carry different phase tags, rho_g/rho_l: see
+///     `detail::phase_tag`), kept explicit so that no single-phase number takes the second
+///     phase; tier-1 catalog numbers; given groups of at most
 ///     two variables (simple ratios such as L/D); tier-2 catalog numbers; the other given
 ///     groups, fewest variables first. Candidates are ordered by catalog order, then by
 ///     the agreement of names and hints with the factors, then by the number of repeating
@@ -53,7 +57,8 @@ struct named_group {
   std::size_t form = 0;                 ///< form of that entry
   rational power{1};                    ///< exponents = entry^power (catalog picks only)
   /// Index of the given group it comes from (`npos` for a catalog pick). `reduced` says it
-  /// was freed of the dependent variable and so differs from that group.
+  /// was freed of the dependent variable and so differs from that group, or (with `source`
+  /// `npos`) is a ratio of two phases' properties built by the named basis (rho_g/rho_l).
   std::size_t source = npos;
   bool reduced = false;
   /// Catalog picks: the variable on each factor of the form, in the form's order.

@@ -161,7 +161,7 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
           rep += is_repeating.empty() || !is_repeating[var] ? 0U : 1U;
           v[var] = form.factors[f].exponent;
         }
-        if (conflict || unidentified) return;
+        if (conflict || unidentified || mixes_phases(form, variables, chosen.data())) return;
         named_candidate c;
         c.entry = sig.entry;
         c.form = sig.form;
@@ -190,7 +190,8 @@ inline std::vector<named_candidate> enumerate_candidates(std::span<const group_v
 template <class T>
 std::vector<named_group> choose_named(std::span<const std::vector<std::int64_t>> classical,
                                       std::span<const named_candidate> candidates, std::size_t dependent,
-                                      std::size_t width, const std::vector<bool>& same_dimension) {
+                                      std::size_t width, const std::vector<bool>& same_dimension,
+                                      std::span<const std::vector<std::int64_t>> phase_ratios) {
   echelon<T> given(width);
   for (const auto& g : classical) given.add(g);
   const std::size_t target = given.rank();
@@ -295,6 +296,15 @@ std::vector<named_group> choose_named(std::span<const std::vector<std::int64_t>>
       if (catalog[c.entry].tier == tier && !contains_dependent(c.exponents)) take_candidate(c);
     }
   };
+  // a density (or viscosity) of one phase over the same of another stays explicit, so that
+  // no catalog number has to carry the second phase (Oh with the gas density)
+  for (const auto& r : phase_ratios) {
+    if (out.size() >= target || contains_dependent(r) || !given.in_span(r) || !chosen.add(r)) continue;
+    named_group g;
+    g.exponents = r;
+    g.reduced = true;
+    out.push_back(std::move(g));
+  }
   take_tier(1);
   for (const auto& f : simple) take_filler(f);
   take_tier(2);
@@ -356,11 +366,24 @@ NONDIM_ANALYSIS_INLINE std::vector<named_group> named_basis(std::span<const grou
   std::vector<bool> same_dimension(n, false);
   if (d < n)
     for (std::size_t i = 0; i < n; ++i) same_dimension[i] = i != d && variables[i].dim == variables[d].dim;
+  // ratios of two variables of one dimension tagged with different phases (rho_g/rho_l)
+  std::vector<std::vector<std::int64_t>> phase_ratios;
+  for (std::size_t i = 0; i < n; ++i)
+    for (std::size_t j = i + 1; j < n; ++j) {
+      const char ti = detail::phase_tag(variables[i].name);
+      const char tj = detail::phase_tag(variables[j].name);
+      if (ti == 0 || tj == 0 || ti == tj || !(variables[i].dim == variables[j].dim)) continue;
+      std::vector<std::int64_t> r(n, 0);
+      r[i] = 1;
+      r[j] = -1;
+      phase_ratios.push_back(std::move(r));
+    }
   std::vector<named_group> out;
   try {
-    out = detail::choose_named<rational>(classical, candidates, d, n, same_dimension);
+    out = detail::choose_named<rational>(classical, candidates, d, n, same_dimension, phase_ratios);
   } catch (const rational_overflow&) {
-    out = detail::choose_named<boost::multiprecision::cpp_rational>(classical, candidates, d, n, same_dimension);
+    out = detail::choose_named<boost::multiprecision::cpp_rational>(classical, candidates, d, n, same_dimension,
+                                                                    phase_ratios);
   }
   return out;
 }

@@ -15,6 +15,9 @@
 #include <string>
 #include <vector>
 
+#include "../../solver/core/detail/cat.hpp"
+#include "../../solver/core/format.hpp"
+#include "../extraction/error.hpp"
 #include "../extraction/pi_group.hpp"
 #include "../extraction/result.hpp"
 #include "named_basis.hpp"
@@ -23,11 +26,29 @@
 
 namespace nondim::detail {
 
+/// The kind a variable declares (`variable::kind`), checked: a kind of the catalog and of
+/// the variable's dimension.
+/// \throws analysis_error when the kind is unknown or of another dimension.
+inline quantity_kind declared_kind(const variable& x) {
+  if (x.kind.empty()) return quantity_kind::unspecified;
+  const quantity_kind k = kind_from_key(x.kind);
+  if (k == quantity_kind::unspecified)
+    throw analysis_error(cat("nondim: variable '", x.name, "' declares kind '", x.kind,
+                             "', which is not a kind of the catalog (see quantity_kinds)"),
+                         x.name);
+  if (!(kind_info(k).dim == x.dim))
+    throw analysis_error(cat("nondim: variable '", x.name, "' declares kind '", x.kind, "' of dimension ",
+                             to_string(kind_info(k).dim), ", but its unit has dimension ", to_string(x.dim)),
+                         x.name);
+  return k;
+}
+
 /// The problem's variables as recognition sees them (views into `a.variables`).
+/// \throws analysis_error when a declared kind is unknown or of another dimension.
 inline std::vector<group_variable> group_variables(const analysis& a) {
   std::vector<group_variable> v;
   v.reserve(a.variables.size());
-  for (const auto& x : a.variables) v.push_back({x.name, x.dim, quantity_kind::unspecified});
+  for (const auto& x : a.variables) v.push_back({x.name, x.dim, declared_kind(x)});
   return v;
 }
 

@@ -8,10 +8,11 @@
 /// dimension, with exponents proportional: group = entry^power, `power` a rational
 /// (mu/(rho U D) is Re^-1; U^2/(g L) is Fr^2 because the catalog defines Fr = U/sqrt(gL)).
 ///
-/// Dimensions decide a match; nothing else does. Where several entries match (h L/k is a
+/// Dimensions decide whether a match is possible. Where several entries match (h L/k is a
 /// Nusselt and a Biot number; nu/alpha, nu/D_AB and alpha/D_AB all share one form), every
 /// one is listed and each is marked `ambiguous`. Kind hints and conventional variable
-/// names only rank the matches:
+/// names rank the matches, and decide the factors of the kinds that need evidence
+/// (`needs_evidence`: a mean free path, the rotation rate of the frame, a drag force...):
 ///  - a kind hint equal to the factor's kind scores 4, a hint more specific than it 3, a
 ///    more general hint 0; a hint of another kind of the same dimension is a contradiction;
 ///  - without a hint, a name listed for the factor's kind ("k_s" for the conductivity of a
@@ -19,6 +20,11 @@
 ///    ("k" for the conductivity of a solid); a name listed only for other kinds of the same
 ///    dimension ("k_s" where the fluid's conductivity is meant) is a contradiction. Failing an exact listing, the part
 ///    of the name before its first `_` is tried the same way with score 1 ("rho_l" is a density);
+///  - a variable on a factor whose kind needs evidence, with no hint or name of that kind
+///    (or a more specific one), contradicts it: P/H of a weir is no Knudsen number;
+///  - variables tagged with two different phases (`rho_l` and `mu_g`: the part after the
+///    last `_` is l, g, v, liq, gas, vap...) contradict an entry defined for one phase (no
+///    factor of a kind that `marks_second_phase`): Oh = μ/√(ρσL) takes μ, ρ of one fluid;
 ///  - a match is `consistent` when no variable contradicts its factor.
 /// Matches are ordered consistent first, then by score, tier and catalog order.
 ///
@@ -284,8 +290,48 @@ inline name_profile profile_of(const group_variable& v, std::uint64_t dim_hash) 
   return p;
 }
 
-/// Agreement of one variable with one factor's kind; `conflict` set on a contradiction.
+/// Agreement of one variable with one factor's kind, before the evidence rule.
+inline int pair_score_of_names(const group_variable& v, const name_profile& p, quantity_kind role,
+                               bool& conflict) noexcept;
+
+/// Agreement of one variable with one factor's kind; `conflict` set on a contradiction,
+/// and when the kind needs evidence and neither hint nor name gives it.
 inline int pair_score(const group_variable& v, const name_profile& p, quantity_kind role, bool& conflict) noexcept {
+  const int s = pair_score_of_names(v, p, role, conflict);
+  if (s <= 0 && needs_evidence(role)) conflict = true;
+  return s;
+}
+
+/// The phase a variable's name is tagged with: the part after its last `_` when that is a
+/// conventional phase subscript (l, g, v, liq, gas, vap...; common practice, no source),
+/// folded to one letter; 0 when untagged.
+inline char phase_tag(std::string_view name) noexcept {
+  const std::size_t at = name.rfind('_');
+  if (at == std::string_view::npos || at == 0) return 0;
+  const std::string_view t = name.substr(at + 1);
+  if (t == "l" || t == "L" || t == "liq" || t == "liquid") return 'l';
+  if (t == "g" || t == "G" || t == "gas") return 'g';
+  if (t == "v" || t == "V" || t == "vap" || t == "vapour" || t == "vapor") return 'v';
+  return 0;
+}
+
+/// True when the variables mapped onto `form` carry two different phase tags and the form
+/// is defined for one phase (no factor of a kind that marks a second phase).
+inline bool mixes_phases(const catalog_form& form, std::span<const group_variable> variables,
+                         const std::size_t* mapped) noexcept {
+  char seen = 0;
+  for (std::size_t i = 0; i < form.size; ++i) {
+    if (marks_second_phase(form.factors[i].kind)) return false;
+    const char t = phase_tag(variables[mapped[i]].name);
+    if (t == 0) continue;
+    if (seen != 0 && t != seen) return true;
+    seen = t;
+  }
+  return false;
+}
+
+inline int pair_score_of_names(const group_variable& v, const name_profile& p, quantity_kind role,
+                               bool& conflict) noexcept {
   if (v.kind != quantity_kind::unspecified && kind_info(v.kind).dim == v.dim) {
     if (v.kind == role) return 4;
     if (is_same_or_general(role, v.kind)) return 3;
@@ -359,6 +405,7 @@ struct recognizer {
       m.variables[i] = index[slot];
       score += pair_score(variables[index[slot]], profile[slot], form->factors[i].kind, conflict);
     }
+    if (mixes_phases(*form, variables, m.variables.data())) conflict = true;
     m.score = score;
     m.consistent = !conflict;
     if (!found || better(m, best)) {

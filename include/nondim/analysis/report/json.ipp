@@ -71,8 +71,13 @@ namespace detail {
 /// The members of the `json_report` object, in order.
 inline json_members json_report_members(const analysis& a, const report_options& o = {}) {
   json_elements variables;
-  for (const auto& v : a.variables)
-    variables.emplace_back(json_members{{"name", v.name}, {"unit", v.unit}, {"dimension", json_dimension(v.dim)}});
+  for (const auto& v : a.variables) {
+    json_members m{{"name", v.name}, {"unit", v.unit}, {"dimension", json_dimension(v.dim)}};
+    // a declared kind, in its identifier spelling ("mean free path" is written mean_free_path)
+    if (const quantity_kind k = kind_from_key(v.kind); k != quantity_kind::unspecified)
+      m.emplace_back("kind", std::string(kind_info(k).id));
+    variables.emplace_back(std::move(m));
+  }
   json_elements repeating;
   for (const auto& r : a.repeating) repeating.emplace_back(r);
   json_elements groups;

@@ -55,9 +55,84 @@ inline std::string latex_upright(std::string_view s) {
   return out;
 }
 
+/// The Greek spelling `w` begins with, longest first ("epsilon" before "eps"), or empty.
+inline std::string_view leading_greek(std::string_view w) {
+  std::string_view best;
+  for (const auto g : latex_greek)
+    if (w.substr(0, g.size()) == g && g.size() > best.size()) best = g;
+  return best;
+}
+
+inline bool is_ascii_letter(char c) {
+  return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z');
+}
+
+/// A head written as several symbols run together, typeset as separate symbols with a thin
+/// space between them and the conventional spellings of the trade (common practice, no
+/// source): `UA` upright (an overall conductance), `dT`, `drho`, `dp` as ΔT, Δρ, Δp,
+/// `mdot` as ṁ, ² and ³ as powers. `UAdT` -> `\mathrm{UA}\,\Delta T`, `drhod²g` ->
+/// `\Delta\rho\,d^{2}\,g`. Empty when the head is not made of such pieces, or none of them
+/// is a conventional spelling (`time` stays one upright word, `rho` one letter).
+inline std::string latex_compound(std::string_view head) {
+  std::string out;
+  bool conventional = false;
+  std::size_t pieces = 0;
+  std::size_t i = 0;
+  while (i < head.size()) {
+    const std::string_view rest = head.substr(i);
+    std::string piece;
+    std::size_t used = 0;
+    if (rest.substr(0, 2) == "\xc2\xb2" || rest.substr(0, 2) == "\xc2\xb3") {  // ² ³ raise the piece before
+      if (pieces == 0) return {};
+      out += rest[1] == '\xb2' ? "^{2}" : "^{3}";
+      conventional = true;
+      i += 2;
+      continue;
+    }
+    if (rest.substr(0, 2) == "UA") {
+      piece = "\\mathrm{UA}";
+      used = 2;
+      conventional = true;
+    } else if (rest.substr(0, 4) == "mdot") {
+      piece = "\\dot{m}";
+      used = 4;
+      conventional = true;
+    } else if (rest[0] == 'd' && rest.size() > 1 && !leading_greek(rest.substr(1)).empty()) {
+      const std::string_view g = leading_greek(rest.substr(1));
+      piece = "\\Delta\\" + std::string(g);
+      used = 1 + g.size();
+      conventional = true;
+    } else if (rest[0] == 'd' && rest.size() > 1 &&
+               ((rest[1] >= 'A' && rest[1] <= 'Z') ||
+                std::string_view("ptxyz").find(rest[1]) != std::string_view::npos)) {
+      // dT, dp, dx: a difference; lower-case letters only where Δ is the usual reading (di, do stay)
+      piece = "\\Delta " + std::string(1, rest[1]);
+      used = 2;
+      conventional = true;
+    } else if (const std::string_view g = leading_greek(rest); !g.empty()) {
+      piece = "\\" + std::string(g);
+      used = g.size();
+    } else if (is_ascii_letter(rest[0])) {
+      piece = std::string(1, rest[0]);
+      used = 1;
+    } else {
+      return {};
+    }
+    if (pieces > 0) out += "\\,";
+    out += piece;
+    ++pieces;
+    i += used;
+  }
+  // a run of single Latin letters only where a conventional piece shows the name is a product
+  if (!conventional) return {};
+  return out;
+}
+
 /// One piece of a name: a Greek spelling becomes its macro, one character stays italic,
-/// a longer word is set upright.
+/// `max` and `min` are the operator names, a longer word is set upright.
 inline std::string latex_word(std::string_view w) {
+  if (w == "max") return "\\max";
+  if (w == "min") return "\\min";
   if (w == "eps") return "\\varepsilon";
   for (const auto g : latex_greek)
     if (w == g) return "\\" + std::string(g);
@@ -69,6 +144,9 @@ inline std::string latex_word(std::string_view w) {
 /// `x^{e}` for the exponent e (none when e == 1); `{x}` braces keep `\rho_{w}^{2}` legal.
 inline std::string latex_power(const std::string& base, const rational& e) {
   if (e == rational{1}) return base;
+  // a product or difference written as one name is raised as a whole: (\Delta p)^{2}
+  if (base.find("\\,") != std::string::npos || base.find("\\Delta") != std::string::npos)
+    return "(" + base + ")^{" + to_string(e) + "}";
   const bool subscripted = base.find('_') != std::string::npos;
   return (subscripted ? "{" + base + "}" : base) + "^{" + to_string(e) + "}";
 }
@@ -89,7 +167,9 @@ inline std::string latex_symbol(std::string_view symbol) {
 
 NONDIM_ANALYSIS_INLINE std::string latex_name(std::string_view name) {
   const auto parts = detail::split_name(name);
-  std::string s = detail::latex_word(parts.head);
+  if (parts.subscript == "dot" && parts.head.size() == 1) return "\\dot{" + detail::latex_word(parts.head) + "}";
+  std::string s = parts.head.size() > 1 ? detail::latex_compound(parts.head) : std::string();
+  if (s.empty()) s = detail::latex_word(parts.head);
   if (!parts.subscript.empty()) s += "_{" + detail::latex_word(parts.subscript) + "}";
   return s;
 }

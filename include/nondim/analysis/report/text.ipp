@@ -10,6 +10,7 @@
 #include "../extraction/text.hpp"
 #include "../names/naming.hpp"
 #include "detail/names.hpp"
+#include "detail/rotation.hpp"
 #include "detail/table.hpp"
 #include "detail/values.hpp"
 #include "options.hpp"
@@ -54,7 +55,7 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
   s += "groups (" + std::to_string(a.groups.size()) + ")\n";
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     const std::string label = (uni ? "\u03a0" : "Pi") + std::to_string(k + 1);
-    s += "  " + label + " = " + a.groups[k].text(form) + detail::names_suffix(a.groups[k], form) + "\n";
+    s += "  " + label + " = " + a.groups[k].text(form) + detail::names_suffix(a.groups[k], form, &a.variables) + "\n";
     if (values[k])
       s += "  " + std::string(label.size() - (uni ? 1 : 0), ' ') + "   " + detail::value_sentence(*values[k]) + "\n";
   }
@@ -82,6 +83,10 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
   for (const auto& note : a.notes)
     if (note != a.deficiency.explanation) s += "note: " + note + "\n";
   for (const auto& note : detail::regime_sentences(a, values, form)) s += "note: " + note + "\n";
+  for (std::size_t k = 0; k < a.groups.size(); ++k)
+    if (const std::string n = detail::hidden_two_pi_note(a, k, (uni ? "\u03a0" : "Pi") + std::to_string(k + 1), form);
+        !n.empty())
+      s += "note: " + n + "\n";
   if (o.alternatives) {
     if (o.alternatives->empty())
       s += "alternatives: none (no other admissible repeating variables)\n";
