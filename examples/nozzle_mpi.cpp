@@ -110,7 +110,8 @@ int main(int argc, char** argv) {
         const nozzle::solution whole = nozzle::run(in, nozzle::serial::partition(in.points), one);
         std::size_t differing = 0;
         for (std::size_t i = 0; i < in.points; ++i)
-          differing += (rho[i] != whole.rho[i]) + (v[i] != whole.v[i]) + (p[i] != whole.p[i]) + (t[i] != whole.t[i]);
+          for (const bool same : {rho[i] == whole.rho[i], v[i] == whole.v[i], p[i] == whole.p[i], t[i] == whole.t[i]})
+            differing += same ? 0 : 1;
         const bool courant_equal = part.largest_courant == whole.largest_courant;
         std::printf("%d processes, %zu points, %zu steps: largest Courant number %.6f (serial %.6f); %zu of %zu values "
                     "differ from the serial run\n",
