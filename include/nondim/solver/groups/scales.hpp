@@ -218,6 +218,14 @@ class reference_scales {
   template <dimension D>
   static constexpr bool spans = detail::span_solution_v<D, R...>.in_span && !detail::span_solution_v<D, R...>.overflow;
 
+  /// \brief Coherent SI: every reference is one SI unit, so every scale is 1 and a
+  /// conversion leaves the numbers as they are (a solver's default before its references are known).
+  constexpr reference_scales() noexcept {
+    values_.fill(1.0);
+    sqrt_.fill(1.0);
+    cbrt_.fill(1.0);
+  }
+
   /// \brief From the references' values in coherent SI units, in the order of R.
   /// Square and cube roots of the references are taken here, once, for scales with exponents p/2 and p/3.
   constexpr explicit reference_scales(const std::array<double, size>& si_values) noexcept : values_(si_values) {
@@ -376,7 +384,7 @@ class reference_scales {
     }
   }
 
-  std::array<double, size> values_;
+  std::array<double, size> values_{};
   std::array<double, size> sqrt_{};
   std::array<double, size> cbrt_{};
 };
