@@ -74,7 +74,8 @@ void run(benchmark::State& state) {
     benchmark::DoNotOptimize(out.data());
     benchmark::ClobberMemory();
   }
-  state.SetBytesProcessed(static_cast<std::int64_t>(state.iterations()) * static_cast<std::int64_t>(2 * cells * sizeof(double)));
+  state.SetBytesProcessed(static_cast<std::int64_t>(state.iterations()) *
+                          static_cast<std::int64_t>(2 * cells * sizeof(double)));
 }
 
 class ratio_reporter : public benchmark::ConsoleReporter {

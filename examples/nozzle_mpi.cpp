@@ -113,10 +113,10 @@ int main(int argc, char** argv) {
           for (const bool same : {rho[i] == whole.rho[i], v[i] == whole.v[i], p[i] == whole.p[i], t[i] == whole.t[i]})
             differing += same ? 0 : 1;
         const bool courant_equal = part.largest_courant == whole.largest_courant;
-        std::printf("%d processes, %zu points, %zu steps: largest Courant number %.6f (serial %.6f); %zu of %zu values "
-                    "differ from the serial run\n",
-                    comm.size(), in.points, in.steps, part.largest_courant, whole.largest_courant, differing,
-                    4 * in.points);
+        std::printf(
+            "%d processes, %zu points, %zu steps: largest Courant number %.6f (serial %.6f); %zu of %zu values "
+            "differ from the serial run\n",
+            comm.size(), in.points, in.steps, part.largest_courant, whole.largest_courant, differing, 4 * in.points);
         status = (differing == 0 && courant_equal && comm.size() > 1) ? 0 : 1;
       }
     }

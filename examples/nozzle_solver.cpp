@@ -24,7 +24,8 @@ int main() {
 
   // the same solver in nondimensional form: rho/rho0, V/a0, x/L, T/T0, and back to SI
   const auto s = nozzle::nozzle_scales(in);
-  const nozzle::solution star = nozzle::run(nozzle::in_reference_units(s, in), nozzle::serial::partition(in.points), comm);
+  const nozzle::solution star =
+      nozzle::run(nozzle::in_reference_units(s, in), nozzle::serial::partition(in.points), comm);
   const nozzle::solution back = nozzle::to_si(s, star);
   double largest = 0.0;
   for (std::size_t i = 0; i < si.p.size(); ++i) largest = std::max(largest, std::abs(back.p[i] / si.p[i] - 1.0));

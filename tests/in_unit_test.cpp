@@ -51,13 +51,13 @@ TEST_SUITE("in_unit") {
   }
 
   TEST_CASE("a specific energy is never written in grays, a rate never in becquerels") {
-  // Gy = J/kg and Bq = 1/s share their dimensions (SI Brochure 9th ed., table 4)
-  CHECK(in_unit(3.0 * units::J / units::kg, units::J / units::kg).symbol != "Gy");
-  CHECK(in_unit(3.0 / units::s, units::Hz).symbol == "Hz");
-}
+    // Gy = J/kg and Bq = 1/s share their dimensions (SI Brochure 9th ed., table 4)
+    CHECK(in_unit(3.0 * units::J / units::kg, units::J / units::kg).symbol != "Gy");
+    CHECK(in_unit(3.0 / units::s, units::Hz).symbol == "Hz");
+  }
 
-TEST_CASE("dimensionless numbers are written without a symbol") {
-  const quantity<dims::dimensionless> m{2.5};
-  CHECK(to_string(in_unit(m, unit<dims::dimensionless>{})) == "2.5");
-}
+  TEST_CASE("dimensionless numbers are written without a symbol") {
+    const quantity<dims::dimensionless> m{2.5};
+    CHECK(to_string(in_unit(m, unit<dims::dimensionless>{})) == "2.5");
+  }
 }

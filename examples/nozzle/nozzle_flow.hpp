@@ -51,8 +51,8 @@ using flux_storage = state_view<flux, layout::soa>;
 
 // ---- inputs -------------------------------------------------------------------------
 struct gas {
-  double gamma;                                 // ratio of specific heats
-  quantity<dims::specific_gas_constant> r;      // specific gas constant
+  double gamma;                             // ratio of specific heats
+  quantity<dims::specific_gas_constant> r;  // specific gas constant
   [[nodiscard]] quantity<dims::specific_heat_capacity> cv() const { return r / (gamma - 1.0); }
   [[nodiscard]] quantity<dims::specific_heat_capacity> cp() const { return gamma * r / (gamma - 1.0); }
 };
@@ -77,9 +77,9 @@ struct setup {
   gas g;
   reservoir res;
   shape nozzle;
-  std::size_t points;   // grid points, inlet and outlet included
-  double courant;       // Courant number of the time step
-  std::size_t steps;    // time steps (a fixed count: runs compare step by step)
+  std::size_t points;  // grid points, inlet and outlet included
+  double courant;      // Courant number of the time step
+  std::size_t steps;   // time steps (a fixed count: runs compare step by step)
 };
 
 /// The part of the grid one process owns: global points [first, first + count).
@@ -134,8 +134,7 @@ state<flux> flux_of(const U& u, const gas& g) {
 
 /// J = (0, p dA/dx, 0).
 template <class U>
-state<source> source_of(const U& u, const gas& g, quantity<dims::area> a,
-                        quantity<dims::area / dims::length> da_dx) {
+state<source> source_of(const U& u, const gas& g, quantity<dims::area> a, quantity<dims::area / dims::length> da_dx) {
   const quantity<dims::pressure> p = pressure_area(u, g) / a;
   return state<source>(quantity<dims::mass_flow_rate / dims::length>{}, p * da_dx,
                        quantity<dims::power / dims::length>{});
@@ -200,8 +199,8 @@ solution run(const setup& in, const domain& d, Comm& comm) {
 
   auto apply_boundaries = [&](const state_storage& w) {
     if (d.has_inlet()) {  // reservoir: V extrapolated, T and p isentropic from T0, p0
-      const quantity<dims::velocity> v = 2.0 * (w[2].get<momentum>() / w[2].get<mass>()) -
-                                         w[3].get<momentum>() / w[3].get<mass>();
+      const quantity<dims::velocity> v =
+          2.0 * (w[2].get<momentum>() / w[2].get<mass>()) - w[3].get<momentum>() / w[3].get<mass>();
       const quantity<dims::temperature> t = in.res.t0 - v * v / (2.0 * g.cp());
       const quantity<dims::pressure> p = in.res.p0 * std::pow(t / in.res.t0, g.gamma / (g.gamma - 1.0));
       w[1] = conserved_of(p / (g.r * t), v, t, area[1], g);

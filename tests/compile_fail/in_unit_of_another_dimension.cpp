@@ -2,8 +2,8 @@
 // expect: nondim: cannot write a quantity in a unit of another dimension
 // expect: dim<nondim::spelled::L<-1>, nondim::spelled::M<1>, nondim::spelled::T<-2> ?>
 // expect: dim<nondim::spelled::L<1> ?>
-#include <nondim/quantity.hpp>
 #include <iostream>
+#include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {
   const auto p = 101.325 * units::kPa;
