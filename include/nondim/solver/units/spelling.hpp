@@ -117,6 +117,7 @@ struct force_N {};
 struct energy_J {};
 struct power_W {};
 struct mass_flow_rate_kg_per_s {};
+struct mass_flux_kg_per_m2_s {};
 struct dynamic_viscosity_Pa_s {};
 struct kinematic_viscosity_or_diffusivity_m2_per_s {};
 struct specific_heat_capacity_J_per_kg_K {};
@@ -194,6 +195,10 @@ struct kind_of<dims::power> {
 template <>
 struct kind_of<dims::mass_flow_rate> {
   using type = spelled::kind::mass_flow_rate_kg_per_s;
+};
+template <>
+struct kind_of<dims::mass_flux> {
+  using type = spelled::kind::mass_flux_kg_per_m2_s;
 };
 template <>
 struct kind_of<dims::dynamic_viscosity> {
