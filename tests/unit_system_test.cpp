@@ -52,6 +52,15 @@ TEST_SUITE("unit system") {
     CHECK(copy.units.scale<dims::pressure>().si() == duct.scale<dims::pressure>().si());
   }
 
+  TEST_CASE("a scale taken once out of the loop gives the same numbers as the per-call conversion") {
+    // p* = p / (rho0 a0^2): the scale is a quantity, computed once; each cell is one division
+    const quantity<dims::pressure> p_ref = duct.scale<dims::pressure>();
+    for (const double p : {101325.0, 4.0e5, 2.5e3}) {
+      const double once = (p * units::Pa) / p_ref;
+      CHECK(once == duct.nondimensional(p * units::Pa));
+    }
+  }
+
   TEST_CASE("an absolute temperature scales by an absolute reference: T/T0 through the kelvin values") {
     const auto t = from_celsius(15.0);  // 288.15 K (ISO 2533 sea level)
     CHECK(duct.nondimensional(t.absolute()) == doctest::Approx(288.15 / 500.0).epsilon(1e-15));
