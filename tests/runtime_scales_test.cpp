@@ -218,6 +218,26 @@ TEST_SUITE("runtime_scales") {
     CHECK_THROWS_AS(s.nondimensional(p_kpa, "kPa", short_out), scales_error);
   }
 
+  TEST_CASE("typed fields convert from references given as text, as the compile-time scales do") {
+    runtime_scales r;
+    r.add("rho", "998 kg/m^3").add("U", "0.4 m/s").add("L", "5 cm");
+    const auto s = scales(998.0 * units::kg / units::m3, 0.4 * units::m / units::s, 5.0 * units::cm);
+    struct cell {
+      double p, u;
+    };
+    std::vector<cell> cells{{101325.0, 0.1}, {100000.0, 0.35}, {99000.0, 0.5}};
+    const auto p = member_view<dims::pressure>(std::span<cell>(cells), &cell::p);  // strided
+    std::vector<double> from_text(3), from_types(3);
+    r.nondimensional(p, std::span<double>(from_text));
+    s.nondimensional(p, std::span<double>(from_types));
+    CHECK(from_text == from_types);  // the same operations in the same order (see above)
+    CHECK(from_text[0] == doctest::Approx(101325.0 / (998.0 * 0.16)).epsilon(1e-14));  // p / (rho U^2)
+    r.dimensional(std::span<const double>(from_text), p);
+    CHECK(cells[1].p == doctest::Approx(100000.0).epsilon(1e-15));
+    std::vector<double> too_short(2);
+    CHECK_THROWS_AS(r.nondimensional(p, std::span<double>(too_short)), scales_error);
+  }
+
   TEST_CASE("nondimensional temperatures are built from differences") {
     // theta = (T - T_ref) / dT (Incropera & DeWitt, ch. 5 and 6, from memory)
     runtime_scales s;

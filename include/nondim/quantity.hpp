@@ -8,6 +8,7 @@
 #include "solver/core/dims.hpp"
 #include "solver/core/format.hpp"
 #include "solver/core/rational.hpp"
+#include "solver/units/in_unit.hpp"
 #include "solver/units/io.hpp"
 #include "solver/units/math.hpp"
 #include "solver/units/quantity_type.hpp"

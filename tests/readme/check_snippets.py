@@ -4,7 +4,7 @@
   check_snippets.py README.md SOURCE_DIR
 
 For every ```cpp block of the README whose preceding paragraph names a file
-`examples/<name>.cpp`, each non-blank line of the block (leading and trailing space
+`examples/<name>.cpp` (or a header under examples/, `examples/nozzle/nozzle_flow.hpp`), each non-blank line of the block (leading and trailing space
 stripped) must be a line of that file. Blocks that name no example are not checked.
 """
 import os
@@ -18,7 +18,7 @@ def main():
     failures, checked = 0, 0
     for m in re.finditer(r"((?:[^\n]*\n){1,8}?)```cpp\n(.*?)```", text, re.S):
         before, code = m.group(1), m.group(2)
-        cited = re.findall(r"`(examples/[A-Za-z0-9_]+\.cpp)`", before)
+        cited = re.findall(r"`(examples/[A-Za-z0-9_/]+\.(?:cpp|hpp))`", before)
         if not cited:
             continue
         path = os.path.join(root, cited[-1])

@@ -52,6 +52,7 @@
 #include "../../solver/core/dimension.hpp"
 #include "../../solver/core/format.hpp"
 #include "../../solver/core/rational.hpp"
+#include "../../solver/fields/owning_field.hpp"
 #include "../../solver/parse/errors.hpp"
 #include "../../solver/parse/quantity_text.hpp"
 #include "../../solver/parse/unit_parser.hpp"
@@ -338,6 +339,36 @@ class runtime_scales {
     check_sizes(si_values.size(), out.size());
     const double s = value_of(exponents_of(d));
     for (std::size_t c = 0; c < out.size(); ++c) out[c] = cell_nondimensional(si_values[c], 1.0, s);
+  }
+  /// \brief A typed field (`field_view`, `strided_field_view`, `field`) over the reference scale of
+  /// its dimension, from references given as text: `out[c] = v[c] / scale`, the scale computed once.
+  /// \throws scales_error when the sizes differ (nothing is written) or the dimension lies outside the span.
+  template <any_field F>
+  void nondimensional(const F& v, std::span<double> out) const {
+    constexpr dimension d = std::remove_cvref_t<F>::dim;
+    check_sizes(v.size(), out.size());
+    const double s = value_of(exponents_of(d));
+    const auto* first = v.data();
+    const std::size_t stride = v.stride();
+    for (std::size_t c = 0; c < out.size(); ++c)
+      out[c] = cell_nondimensional(static_cast<double>(first[c * stride]), 1.0, s);
+  }
+  /// \brief A typed field from nondimensional numbers: `v[c] = x[c] * scale` (the inverse).
+  /// \throws scales_error as `nondimensional(v, out)`.
+  template <any_field F>
+  void dimensional(std::span<const double> x, F&& v) const {
+    constexpr dimension d = std::remove_cvref_t<F>::dim;
+    using rep = std::remove_pointer_t<decltype(v.data())>;
+    static_assert(detail::holds<!std::is_const_v<rep>, detail::spell<d>, rep>,
+                  "nondim: dimensional(x, v) writes into v; a read-only view (Rep = const double) cannot take the "
+                  "values");
+    if constexpr (!std::is_const_v<rep>) {
+      check_sizes(x.size(), v.size());
+      const double s = value_of(exponents_of(d));
+      rep* first = v.data();
+      const std::size_t stride = v.stride();
+      for (std::size_t c = 0; c < x.size(); ++c) first[c * stride] = static_cast<rep>(cell_dimensional(x[c], 1.0, s));
+    }
   }
   /// \brief The same for cell values in unit `unit_text`; each cell as `nondimensional(values[c], unit_text)`.
   void nondimensional(std::span<const double> values, std::string_view unit_text, std::span<double> out) const {

@@ -94,7 +94,7 @@ class field_reference {
   /// Refused: reading an element as a quantity of another dimension.
   template <dimension D2, class R2>
   requires(D2 != D) constexpr operator quantity<D2, R2>() const noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D2>, detail::spell<D>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D2>, detail::spell_named<D>>,
                   "nondim: cannot read a field element as a quantity of another dimension (target first, "
                   "field second)");
     return {};
@@ -135,7 +135,7 @@ class field_reference {
   /// Refused: a quantity of another dimension.
   template <dimension D2, class R2>
   requires(writable&& D2 != D) constexpr const field_reference& operator=(const quantity<D2, R2>&) const noexcept {
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot assign to a field element a quantity of another dimension (field first, value "
                   "second)");
     return *this;
@@ -144,7 +144,7 @@ class field_reference {
   template <dimension D2, class R2>
   requires(writable&& D2 != D) constexpr const field_reference& operator=(
       const field_reference<D2, R2>&) const noexcept {
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot assign to a field element an element of a field of another dimension (target "
                   "first, source second)");
     return *this;

@@ -29,9 +29,12 @@
 /// Whole fields: `s.nondimensional(v, out)` and `s.dimensional(in, v)` convert a field view
 /// (or a `field`) into and out of a span of numbers, the scale computed once per call.
 ///
-/// Temperatures: a nondimensional temperature is built from differences,
-/// theta = (T - T_ref) / dT, by `nondimensional_difference(T, T_ref)`; an absolute
-/// `temperature_point` passed to `nondimensional` does not compile.
+/// Temperatures: a difference scales by a difference, theta = (T - T_ref) / dT, by
+/// `nondimensional_difference(T, T_ref)` with the reference dT = T_wall - T_inf; an absolute
+/// temperature scales by an absolute reference, T/T0 in gas dynamics, through the kelvin
+/// values `scales(..., T0.absolute())` and `nondimensional(T.absolute())`. A reading
+/// (`temperature_point`) passed to `nondimensional`, or given as a reference, does not compile:
+/// the code must say which of the two it means.
 
 #include <array>
 #include <cstddef>
@@ -218,6 +221,14 @@ class reference_scales {
   template <dimension D>
   static constexpr bool spans = detail::span_solution_v<D, R...>.in_span && !detail::span_solution_v<D, R...>.overflow;
 
+  /// \brief Coherent SI: every reference is one SI unit, so every scale is 1 and a
+  /// conversion leaves the numbers as they are (a solver's default before its references are known).
+  constexpr reference_scales() noexcept {
+    values_.fill(1.0);
+    sqrt_.fill(1.0);
+    cbrt_.fill(1.0);
+  }
+
   /// \brief From the references' values in coherent SI units, in the order of R.
   /// Square and cube roots of the references are taken here, once, for scales with exponents p/2 and p/3.
   constexpr explicit reference_scales(const std::array<double, size>& si_values) noexcept : values_(si_values) {
@@ -252,7 +263,8 @@ class reference_scales {
   double nondimensional(const temperature_point<Rep>&) const noexcept {
     static_assert(detail::holds<false, spelled::dim<spelled::Theta<1>>, Rep>,
                   "nondim: an absolute temperature (temperature_point) was passed where a difference is meant; "
-                  "write s.nondimensional_difference(T, T_ref) for theta = (T - T_ref) / dT");
+                  "write s.nondimensional_difference(T, T_ref) for theta = (T - T_ref) / dT, or "
+                  "s.nondimensional(T.absolute()) for T/T0 when the reference is the absolute T0.absolute()");
     return 0.0;
   }
   /// Refused: a raw number has no dimension to scale.
@@ -376,7 +388,7 @@ class reference_scales {
     }
   }
 
-  std::array<double, size> values_;
+  std::array<double, size> values_{};
   std::array<double, size> sqrt_{};
   std::array<double, size> cbrt_{};
 };
@@ -394,7 +406,8 @@ constexpr auto scales(const Q&... refs) noexcept {
     using arg = std::remove_cvref_t<std::tuple_element_t<bad, std::tuple<Q...>>>;
     static_assert(detail::holds<!detail::is_temperature_point<arg>::value, detail::not_a_quantity<bad + 1, arg>>,
                   "nondim: a reference temperature for scales() is a difference (quantity<dims::temperature>, "
-                  "e.g. T_wall - T_inf), not an absolute temperature_point");
+                  "e.g. T_wall - T_inf) for theta = (T - T_ref) / dT, or T0.absolute() (kelvin) for T/T0; not a "
+                  "temperature_point reading");
     static_assert(detail::holds<detail::is_temperature_point<arg>::value, detail::not_a_quantity<bad + 1, arg>>,
                   "nondim: scales() takes reference quantities (quantity<D, Rep>) only; the argument at the "
                   "position shown is not one");

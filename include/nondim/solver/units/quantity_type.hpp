@@ -106,7 +106,7 @@ class quantity : public detail::quantity_base<D, Rep> {
   /// Refused: a quantity of another dimension (the poisoned overload names both).
   template <dimension D2, class R2>
   requires(D2 != D) constexpr quantity(const quantity<D2, R2>&) noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot initialise or assign a quantity from one of another dimension "
                   "(target first, source second)");
   }
@@ -176,26 +176,26 @@ NONDIM_ALWAYS_INLINE constexpr auto operator<=>(const quantity<D, R>& a, const q
 // Poisoned fallbacks: each names the two dimensions.
 template <dimension D1, class R1, dimension D2, class R2>
 requires(D1 != D2) constexpr quantity<D1, R1> operator+(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: cannot add quantities of different dimensions");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires(D1 != D2) constexpr quantity<D1, R1> operator-(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: cannot subtract quantities of different dimensions");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires(D1 != D2) constexpr bool operator==(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: cannot compare quantities of different dimensions");
   return false;
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires(D1 != D2) constexpr std::partial_ordering operator<=>(const quantity<D1, R1>&,
                                                                const quantity<D2, R2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: cannot compare quantities of different dimensions");
   return std::partial_ordering::unordered;
 }

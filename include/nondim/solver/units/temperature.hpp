@@ -94,6 +94,33 @@ NONDIM_ALWAYS_INLINE constexpr temperature_point<R> operator+(const temperature_
   return {};
 }
 
+namespace detail {
+template <class T>
+inline constexpr bool is_reading = false;
+template <class R>
+inline constexpr bool is_reading<temperature_point<R>> = true;
+}  // namespace detail
+
+/// Refused: a thermometer reading multiplied or divided in a formula (`R * from_celsius(15)`).
+/// One overload for every such product, so that both compilers stop at this sentence instead
+/// of listing every operator* they tried.
+template <class A, class B>
+requires(detail::is_reading<A> || detail::is_reading<B>) constexpr A operator*(const A& a, const B&) noexcept {
+  static_assert(detail::holds<false, A, B>,
+                "nondim: an absolute temperature (temperature_point, a thermometer reading) cannot be multiplied "
+                "or divided; in a formula such as p = rho R T use T.absolute(), the thermodynamic temperature in "
+                "kelvin, or a difference T - T_ref");
+  return a;
+}
+template <class A, class B>
+requires(detail::is_reading<A> || detail::is_reading<B>) constexpr A operator/(const A& a, const B&) noexcept {
+  static_assert(detail::holds<false, A, B>,
+                "nondim: an absolute temperature (temperature_point, a thermometer reading) cannot be multiplied "
+                "or divided; in a formula such as p = rho R T use T.absolute(), the thermodynamic temperature in "
+                "kelvin, or a difference T - T_ref");
+  return a;
+}
+
 /// \brief 20 °C as an absolute temperature.
 NONDIM_ALWAYS_INLINE constexpr temperature_point<double> from_celsius(double c) noexcept {
   return temperature_point<double>::from_celsius(c);
