@@ -4,7 +4,7 @@
 set -eu
 packages="cmake ninja-build g++ clang libclang-rt-14-dev libeigen3-dev libboost-dev doctest-dev
 libcli11-dev libtomlplusplus-dev libcsv-dev gnuplot-nox python3-statsmodels nlohmann-json3-dev python3 python3-sympy python3-uncertainties libbenchmark-dev valgrind
-pkgconf make libopenmpi-dev openmpi-bin $*"
+pkgconf make libopenmpi-dev openmpi-bin libomp-14-dev $*"
 missing=""
 for p in $packages; do
   if ! dpkg-query -W -f='${Status}' "$p" 2>/dev/null | grep -q "install ok installed"; then
