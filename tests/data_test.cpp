@@ -139,6 +139,18 @@ TEST_SUITE("data") {
     CHECK(contains(error_of([&] { (void)group_values(a, zero); }), "'U'"));
   }
 
+  TEST_CASE("rounding a value that is not finite, or at the end of the double range, writes it without rounding") {
+    // IEEE 754: infinities and NaN have no decimal place; found by the exception-contract
+    // test under UBSan (a conversion of log10(inf) to int)
+    const double inf = std::numeric_limits<double>::infinity();
+    CHECK(round_for_report(inf, 1.0).value_text == "inf");
+    CHECK(round_for_report(-inf, 0.5).value_text == "-inf");
+    CHECK(round_for_report(std::numeric_limits<double>::quiet_NaN(), 1.0).value_text == "nan");
+    // the largest double (1.797...e308) to the place of an uncertainty of 1e306 rounds up
+    // past it: the text keeps the digits it could write
+    CHECK(round_for_report(std::numeric_limits<double>::max(), 1e306).value_text.find("e308") != std::string::npos);
+  }
+
   TEST_CASE("values are rounded to what the computation supports") {
     // no uncertainty: 12 significant digits (a product of doubles is not exact)
     CHECK(round_for_report(3999.999999999998).value_text == "4000");

@@ -46,6 +46,7 @@ inline std::string printed(const char* format, int digits, double x) {
 /// `x` rounded to a multiple of 10^place: fixed notation for magnitudes 1e-4 .. 1e7,
 /// scientific beyond.
 inline std::string at_decimal_place(double x, int place) {
+  if (!std::isfinite(x)) return printed("%.*g", 12, x);  // "inf", "nan": no decimal place to round to
   const double magnitude = std::abs(x);
   const int lead = magnitude == 0.0 ? place : static_cast<int>(std::floor(std::log10(magnitude)));
   if (lead >= -4 && lead < 7) {
@@ -57,7 +58,8 @@ inline std::string at_decimal_place(double x, int place) {
   if (digits < 1) return "0";
   std::string s = printed("%.*e", digits - 1, x);
   // rounding may carry into a new leading digit (9.96e9 -> 1.00e10): one digit too many
-  if (static_cast<int>(std::floor(std::log10(std::abs(std::strtod(s.c_str(), nullptr))))) > lead && digits > 1)
+  const double back = std::abs(std::strtod(s.c_str(), nullptr));  // infinite when 1.8e308 rounds up
+  if (digits > 1 && std::isfinite(back) && back > 0.0 && static_cast<int>(std::floor(std::log10(back))) > lead)
     s = printed("%.*e", digits - 2, x);
   return tidy_exponent(s);
 }
