@@ -6,6 +6,7 @@
 #include <stdexcept>
 #include <string>
 #include <vector>
+#include "text_support.hpp"
 
 using namespace nondim;
 using test_support::repeating;
@@ -24,20 +25,9 @@ analysis_error caught(Fn&& f) {
   return analysis_error("");
 }
 
-bool contains(const std::string& s, const std::string& part) {
-  return s.find(part) != std::string::npos;
-}
+using test_support::contains;
 
-/// Drag on a sphere (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory).
-problem sphere_drag() {
-  problem p;
-  p.add("F", dims::force)
-      .add("rho", dims::density)
-      .add("U", dims::velocity)
-      .add("D", dims::length)
-      .add("mu", dims::dynamic_viscosity);
-  return p;
-}
+using test_support::sphere_drag;
 
 }  // namespace
 

@@ -52,17 +52,7 @@ using namespace nondim;
 
 namespace {
 
-/// Drag on a sphere (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory):
-/// groups F/(rho U^2 D^2) and mu/(rho U D) = 1/Re.
-problem sphere_drag() {
-  problem p;
-  p.add("F", dims::force)
-      .add("rho", dims::density)
-      .add("U", dims::velocity)
-      .add("D", dims::length)
-      .add("mu", dims::dynamic_viscosity);
-  return p;
-}
+using test_support::sphere_drag;
 
 }  // namespace
 

@@ -32,19 +32,21 @@ bool fits_int64(int128 v) {
 }
 
 // Forty-bit entries: products of two of them overflow int64 (2^80 > 2^63).
-constexpr std::int64_t a = 1234567890123;
-constexpr std::int64_t b = 987654321017;
-constexpr std::int64_t c = 555555555557;
-constexpr std::int64_t d = 777777777781;
-constexpr std::int64_t e = 1111111111151;
-constexpr std::int64_t f = 333333333383;
+constexpr std::int64_t a_40 = 1234567890123;
+constexpr std::int64_t b_40 = 987654321017;
+constexpr std::int64_t c_40 = 555555555557;
+constexpr std::int64_t d_40 = 777777777781;
+constexpr std::int64_t e_40 = 1111111111151;
+constexpr std::int64_t f_40 = 333333333383;
 
 /// z = x + y over L and M with huge entries: the null vector (z, x, y) = (1, -1, -1) is
 /// small although the elimination passes through 80-bit products (linear algebra: z - x - y = 0
 /// by construction, and x, y are independent because a d - b c != 0).
 problem huge_but_small_answer() {
   problem p;
-  p.add("z", dimension{a + c, b + d, 0}).add("x", dimension{a, b, 0}).add("y", dimension{c, d, 0});
+  p.add("z", dimension{a_40 + c_40, b_40 + d_40, 0})
+      .add("x", dimension{a_40, b_40, 0})
+      .add("y", dimension{c_40, d_40, 0});
   return p;
 }
 
@@ -58,7 +60,7 @@ bool same_result(const analysis& l, const analysis& r) {
 
 TEST_SUITE("analysis exact arithmetic") {
   TEST_CASE("huge entries overflow int64, and the cpp_rational path gives the small exact group") {
-    REQUIRE(static_cast<int128>(a) * d - static_cast<int128>(b) * c != 0);  // x, y independent
+    REQUIRE(static_cast<int128>(a_40) * d_40 - static_cast<int128>(b_40) * c_40 != 0);  // x, y independent
     const problem p = huge_but_small_answer();
     const analysis autom = analyze(p);
     CHECK(autom.multiprecision);  // automatic fell back: the int64 run overflowed
@@ -110,15 +112,15 @@ TEST_SUITE("analysis exact arithmetic") {
   TEST_CASE("a group whose exact exponents exceed 64 bits is refused, naming its variable") {
     // The null vector of a 2 x 3 matrix is the cross product of its rows divided by the
     // gcd (linear algebra); computed here in 128 bits it does not fit in int64.
-    const int128 n0 = static_cast<int128>(c) * f - static_cast<int128>(e) * d;
-    const int128 n1 = static_cast<int128>(e) * b - static_cast<int128>(a) * f;
-    const int128 n2 = static_cast<int128>(a) * d - static_cast<int128>(c) * b;
+    const int128 n0 = static_cast<int128>(c_40) * f_40 - static_cast<int128>(e_40) * d_40;
+    const int128 n1 = static_cast<int128>(e_40) * b_40 - static_cast<int128>(a_40) * f_40;
+    const int128 n2 = static_cast<int128>(a_40) * d_40 - static_cast<int128>(c_40) * b_40;
     const int128 g = gcd128(gcd128(n0, n1), n2);
     REQUIRE(g != 0);
     CHECK_FALSE((fits_int64(n0 / g) && fits_int64(n1 / g) && fits_int64(n2 / g)));
 
     problem p;
-    p.add("x", dimension{a, b, 0}).add("y", dimension{c, d, 0}).add("w", dimension{e, f, 0});
+    p.add("x", dimension{a_40, b_40, 0}).add("y", dimension{c_40, d_40, 0}).add("w", dimension{e_40, f_40, 0});
     try {
       (void)analyze(p, test_support::repeating({"y", "w"}));
       FAIL("exponents beyond 64 bits must be refused");

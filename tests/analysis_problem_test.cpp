@@ -4,15 +4,14 @@
 
 #include <exception>
 #include <string>
+#include "text_support.hpp"
 
 using namespace nondim;
 using test_support::check_groups;
 using test_support::expected_group;
 
 namespace {
-bool contains(const std::string& s, const std::string& part) {
-  return s.find(part) != std::string::npos;
-}
+using test_support::contains;
 }  // namespace
 
 TEST_SUITE("analysis problem") {

@@ -120,4 +120,16 @@ inline nondim::options repeating(std::vector<std::string> names) {
   return o;
 }
 
+/// Drag on a sphere (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory): F, rho, U, D, mu;
+/// groups F/(rho U^2 D^2) and mu/(rho U D) = 1/Re.
+inline nondim::problem sphere_drag() {
+  nondim::problem p;
+  p.add("F", nondim::dims::force)
+      .add("rho", nondim::dims::density)
+      .add("U", nondim::dims::velocity)
+      .add("D", nondim::dims::length)
+      .add("mu", nondim::dims::dynamic_viscosity);
+  return p;
+}
+
 }  // namespace test_support

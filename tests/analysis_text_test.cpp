@@ -5,14 +5,13 @@
 #include <cmath>
 #include <sstream>
 #include <string>
+#include "text_support.hpp"
 
 using namespace nondim;
 
 namespace {
 
-bool contains(const std::string& s, const std::string& part) {
-  return s.find(part) != std::string::npos;
-}
+using test_support::contains;
 
 bool pure_ascii(const std::string& s) {
   for (const char c : s)
@@ -20,15 +19,9 @@ bool pure_ascii(const std::string& s) {
   return true;
 }
 
-/// Drag on a sphere with rho, U, D repeating (White, Fluid Mechanics, 7th ed., Sec. 5.3, from memory).
-analysis sphere_drag() {
-  problem p;
-  p.add("F", dims::force)
-      .add("rho", dims::density)
-      .add("U", dims::velocity)
-      .add("D", dims::length)
-      .add("mu", dims::dynamic_viscosity);
-  return analyze(p, test_support::repeating({"rho", "U", "D"}));
+/// The sphere's drag with rho, U, D repeating.
+analysis sphere_drag_analysis() {
+  return analyze(test_support::sphere_drag(), test_support::repeating({"rho", "U", "D"}));
 }
 
 }  // namespace
@@ -36,7 +29,7 @@ analysis sphere_drag() {
 TEST_SUITE("analysis text") {
   TEST_CASE("a group is written F·ρ⁻¹·U⁻²·D⁻² in Unicode and F*rho^-1*U^-2*D^-2 in ASCII") {
     // the forms DESIGN.md and the task give for the drag coefficient group
-    const analysis a = sphere_drag();
+    const analysis a = sphere_drag_analysis();
     CHECK(a.groups[0].text() == "F\u00b7\u03c1\u207b\u00b9\u00b7U\u207b\u00b2\u00b7D\u207b\u00b2");
     CHECK(a.groups[0].text(text_form::ascii) == "F*rho^-1*U^-2*D^-2");
     CHECK(a.groups[1].text(text_form::ascii) == "mu*rho^-1*U^-1*D^-1");
@@ -66,7 +59,7 @@ TEST_SUITE("analysis text") {
   }
 
   TEST_CASE("the whole analysis as text shows the matrix, rank, repeating, groups, isolated and SVD") {
-    const analysis a = sphere_drag();
+    const analysis a = sphere_drag_analysis();
     const std::string u = to_string(a);
     CHECK(contains(u, "dimension matrix"));
     CHECK(contains(u, "  L   1  -3   1  1  -1\n"));  // F rho U D mu: L exponents (SI Brochure table 4)

@@ -14,13 +14,12 @@
 #include <optional>
 #include <string>
 #include <vector>
+#include "text_support.hpp"
 
 using namespace nondim;
 
 namespace {
-bool contains(const std::string& s, const std::string& part) {
-  return s.find(part) != std::string::npos;
-}
+using test_support::contains;
 // The message of the analysis_error `f` throws ("" when it throws none).
 template <class F>
 std::string error_of(F f) {

@@ -10,14 +10,13 @@
 #include <random>
 #include <string>
 #include <vector>
+#include "text_support.hpp"
 
 using namespace nondim;
 
 namespace {
 
-bool contains(const std::string& s, const std::string& part) {
-  return s.find(part) != std::string::npos;
-}
+using test_support::contains;
 
 template <class F>
 fit_error fit_error_of(F f) {

@@ -7,13 +7,12 @@
 
 #include <string>
 #include <vector>
+#include "text_support.hpp"
 
 using namespace nondim;
 
 namespace {
-bool contains(const std::string& s, const std::string& part) {
-  return s.find(part) != std::string::npos;
-}
+using test_support::contains;
 }  // namespace
 
 TEST_SUITE("report scales") {

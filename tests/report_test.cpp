@@ -9,6 +9,7 @@
 #include <cmath>
 #include <limits>
 #include <string>
+#include "text_support.hpp"
 
 using namespace nondim;
 
@@ -20,9 +21,7 @@ analysis drag() {
   p.add("F", "N").add("rho", "kg/m^3").add("U", "m/s").add("D", "m").add("mu", "Pa*s");
   return analyze(p);
 }
-bool contains(const std::string& s, const std::string& part) {
-  return s.find(part) != std::string::npos;
-}
+using test_support::contains;
 }  // namespace
 
 TEST_SUITE("report") {

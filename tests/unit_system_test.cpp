@@ -19,9 +19,9 @@ using gas_dynamics = reference_scales<dims::density, dims::velocity, dims::lengt
 // a unit system at namespace scope: default SI as a constant, or from references
 constexpr gas_dynamics coherent_si{};
 // references of our own: air at 400 kPa and 500 K in a 0.2 m duct, R = 287 J/(kg K) (common practice)
-const auto t0 = from_kelvin(500.0);
-const auto rho0 = 400.0 * units::kPa / (287.0 * units::J / (units::kg * units::K) * t0.absolute());
-const auto duct = scales(rho0, 448.2 * units::m / units::s, 0.2 * units::m, t0.absolute());
+const auto t_duct = from_kelvin(500.0);
+const auto rho_duct = 400.0 * units::kPa / (287.0 * units::J / (units::kg * units::K) * t_duct.absolute());
+const auto duct = scales(rho_duct, 448.2 * units::m / units::s, 0.2 * units::m, t_duct.absolute());
 
 struct solver_settings {  // a unit system stored in a struct, set after construction
   gas_dynamics units;
@@ -53,7 +53,7 @@ TEST_SUITE("unit system") {
   }
 
   TEST_CASE("a scale taken once out of the loop gives the same numbers as the per-call conversion") {
-    // p* = p / (rho0 a0^2): the scale is a quantity, computed once; each cell is one division
+    // p* = p / (rho_duct a0^2): the scale is a quantity, computed once; each cell is one division
     const quantity<dims::pressure> p_ref = duct.scale<dims::pressure>();
     for (const double p : {101325.0, 4.0e5, 2.5e3}) {
       const double once = (p * units::Pa) / p_ref;
