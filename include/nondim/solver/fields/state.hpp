@@ -340,15 +340,28 @@ class state_ref {
   }
 
   /// \brief Component I (by position) or Tag of this cell.
+  /// Each computes the address itself, with no call to another member: a debug build (-O0)
+  /// pays for every inlined layer.
   template <std::size_t I>
   NONDIM_ALWAYS_INLINE constexpr auto get() const noexcept {
     static_assert(I < size, "nondim: component index out of range");
-    return field_reference<Set::dims[I], Rep>(at(I));
+    if constexpr (soa) {
+      return field_reference<Set::dims[I], Rep>(p_ + I * step_);
+    } else {
+      return field_reference<Set::dims[I], Rep>(p_ + I);
+    }
   }
   template <class Tag>
   NONDIM_ALWAYS_INLINE constexpr auto get() const noexcept {
     detail::check_component<Set, Tag>();
-    return get<Set::template index_of<Tag>>();
+    constexpr std::size_t i = Set::template index_of<Tag>;
+    if constexpr (i >= size) {
+      return;  // refused above
+    } else if constexpr (soa) {
+      return field_reference<Set::dims[i], Rep>(p_ + i * step_);
+    } else {
+      return field_reference<Set::dims[i], Rep>(p_ + i);
+    }
   }
 
   /// \brief Stores a state of the same dimensions, component by component.
