@@ -57,7 +57,7 @@ class field_view {
   /// Refused: a field of another dimension.
   template <dimension D2, class R2>
   requires(D2 != D) constexpr field_view(const field_view<D2, R2>&) noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot view a field as one of another dimension (target first, source second)");
   }
 
@@ -115,7 +115,7 @@ class strided_field_view {
   /// Refused: a field of another dimension.
   template <dimension D2, class R2>
   requires(D2 != D) constexpr strided_field_view(const strided_field_view<D2, R2>&) noexcept {  // NOLINT
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot view a field as one of another dimension (target first, source second)");
   }
 

@@ -104,7 +104,7 @@ class field_reference {
   /// Refused: a dimensional element is not a raw number.
   template <scalar T>
   requires(!D.is_dimensionless()) constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                   "nondim: a field element of a dimensional field cannot become a raw number; divide it by a "
                   "unit (`v[i] / units::Pa`) or read `v[i].si()`");
     return T{};

@@ -179,20 +179,20 @@ consteval void check_counts() {
 // The diagnostics name the first component whose dimensions differ: its position, both
 // tags, both dimensions. (Computed in functions at namespace scope: GCC 12 crashes on these
 // spellings inside a member of a class template.)
-#define NONDIM_STATE_CHECK(NAME, MESSAGE)                                                                     \
-  template <class A, class B>                                                                                 \
-  consteval void NAME() {                                                                                     \
-    check_counts<A, B>();                                                                                     \
-    constexpr bool same_size = A::size == B::size;                                                            \
-    constexpr std::size_t at = same_size ? first_mismatch<A, B>() : A::size;                                  \
-    constexpr std::size_t shown = at < A::size ? at : 0;                                                      \
-    constexpr std::size_t shown_b = shown < B::size ? shown : 0;                                              \
-    constexpr dimension left = A::dims[shown];                                                                \
-    constexpr dimension right = B::dims[shown_b];                                                             \
-    static_assert(holds<(!same_size || at == A::size),                                                        \
-                        component_at<shown + 1, typename A::template component_type<shown>, spell<left>>,     \
-                        component_at<shown + 1, typename B::template component_type<shown_b>, spell<right>>>, \
-                  MESSAGE);                                                                                   \
+#define NONDIM_STATE_CHECK(NAME, MESSAGE)                                                                           \
+  template <class A, class B>                                                                                       \
+  consteval void NAME() {                                                                                           \
+    check_counts<A, B>();                                                                                           \
+    constexpr bool same_size = A::size == B::size;                                                                  \
+    constexpr std::size_t at = same_size ? first_mismatch<A, B>() : A::size;                                        \
+    constexpr std::size_t shown = at < A::size ? at : 0;                                                            \
+    constexpr std::size_t shown_b = shown < B::size ? shown : 0;                                                    \
+    constexpr dimension left = A::dims[shown];                                                                      \
+    constexpr dimension right = B::dims[shown_b];                                                                   \
+    static_assert(holds<(!same_size || at == A::size),                                                              \
+                        component_at<shown + 1, typename A::template component_type<shown>, spell_named<left>>,     \
+                        component_at<shown + 1, typename B::template component_type<shown_b>, spell_named<right>>>, \
+                  MESSAGE);                                                                                         \
   }
 
 NONDIM_STATE_CHECK(check_assignable,

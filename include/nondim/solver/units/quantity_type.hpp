@@ -64,7 +64,7 @@ struct no_number_conversion {
   template <class T>
   requires std::is_arithmetic_v<T>
   constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                   "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
                   "(`q / units::m`) or read `q.si()`");
     return T{};
@@ -100,7 +100,7 @@ class quantity : public detail::quantity_base<D, Rep> {
   /// Refused: a raw number has no unit. Multiply it by one, or say it is SI.
   template <scalar T>
   requires(!D.is_dimensionless()) constexpr quantity(T) noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                   "nondim: a raw number cannot become a dimensional quantity; write `x * units::m` "
                   "(its unit) or `quantity<D>::from_si(x)`");
   }
@@ -147,13 +147,13 @@ class quantity : public detail::quantity_base<D, Rep> {
   }
   template <dimension D2, class R2>
   requires(D2 != D) constexpr quantity& operator+=(const quantity<D2, R2>&) noexcept {
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot add a quantity of another dimension");
     return *this;
   }
   template <dimension D2, class R2>
   requires(D2 != D) constexpr quantity& operator-=(const quantity<D2, R2>&) noexcept {
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot subtract a quantity of another dimension");
     return *this;
   }
@@ -251,37 +251,37 @@ namespace nondim {
 // named (without these, the built-in operators would be tried and fail as an ambiguity).
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator+(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator+(T, const quantity<D, R>&) noexcept {
-  static_assert(detail::dimensions_involved<T, detail::spell<D>>,
+  static_assert(detail::dimensions_involved<T, detail::spell_named<D>>,
                 "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator-(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot subtract a raw number from a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator-(T, const quantity<D, R>&) noexcept {
-  static_assert(detail::dimensions_involved<T, detail::spell<D>>,
+  static_assert(detail::dimensions_involved<T, detail::spell_named<D>>,
                 "nondim: cannot subtract a dimensional quantity from a raw number; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr bool operator==(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
   return false;
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr std::partial_ordering operator<=>(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
   return std::partial_ordering::unordered;
 }
