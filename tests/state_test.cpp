@@ -15,23 +15,17 @@
 #include <type_traits>
 #include <vector>
 
+#include "../examples/nozzle/nozzle_flow.hpp"
+
 using namespace nondim;
 
 // Anderson, Computational Fluid Dynamics: The Basics with Applications (1995), ch. 7,
 // quasi-one-dimensional nozzle flow in conservation form (from memory):
 //   dU/dt + dF/dx = J,  U = (rho A, rho A V, rho (e + V^2/2) A),
 //   F = (rho A V, rho A V^2 + p A, rho (e + V^2/2) A V + p A V),  J = (0, p dA/dx, 0).
+// The conserved variables U (mass, momentum, energy) and the fluxes F (mass_flux,
+// momentum_flux, energy_flux) are the example solver's own.
 namespace nozzle {
-struct mass : component<dims::mass / dims::length> {};      // U1 = rho A, kg/m
-struct momentum : component<dims::mass_flow_rate> {};       // U2 = rho A V, kg/s
-struct energy : component<dims::energy / dims::length> {};  // U3 = rho E A, J/m
-using conserved = state_set<mass, momentum, energy>;
-
-struct mass_flux : component<dims::mass_flow_rate> {};  // F1, kg/s
-struct momentum_flux : component<dims::force> {};       // F2, N
-struct energy_flux : component<dims::power> {};         // F3, W
-using flux = state_set<mass_flux, momentum_flux, energy_flux>;
-
 struct density : component<dims::density> {};
 struct velocity : component<dims::velocity> {};
 struct pressure : component<dims::pressure> {};

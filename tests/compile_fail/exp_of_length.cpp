@@ -1,6 +1,7 @@
 // exp of a length.
 // expect: nondim: exp needs a dimensionless argument
 // expect: L<1>
+// expect: kind::length_m
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

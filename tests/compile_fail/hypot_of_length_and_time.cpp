@@ -2,6 +2,7 @@
 // expect: nondim: hypot needs two quantities of the same dimension
 // expect: L<1>
 // expect: T<1>
+// expect: kind::length_m.*kind::time_s
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

@@ -2,6 +2,7 @@
 // expect: nondim: cannot write a quantity in a unit of another dimension
 // expect: dim<nondim::spelled::L<-1>, nondim::spelled::M<1>, nondim::spelled::T<-2> ?>
 // expect: dim<nondim::spelled::L<1> ?>
+// expect: kind::pressure_or_stress_Pa.*kind::length_m
 #include <iostream>
 #include <nondim/quantity.hpp>
 using namespace nondim;

@@ -2,6 +2,7 @@
 // is a length (F/(rho U^2 D^2) is the drag coefficient; White, 7th ed., 5.3, from memory).
 // expect: nondim: this product of powers is not dimensionless
 // expect: dim<nondim::spelled::L<1> ?>
+// expect: kind::length_m
 #include <nondim/quantity.hpp>
 #include <nondim/solver.hpp>
 using namespace nondim;

@@ -1,6 +1,7 @@
 // A dimensional quantity into a double.
 // expect: nondim: a dimensional quantity cannot become a raw number
 // expect: M<1>, nondim::spelled::T<-3>, nondim::spelled::Theta<-1>
+// expect: kind::heat_transfer_coefficient_W_per_m2_K
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

@@ -1,6 +1,7 @@
 // A raw double into a dimensional quantity.
 // expect: nondim: a raw number cannot become a dimensional quantity
 // expect: L<1>
+// expect: kind::length_m
 #include <nondim/quantity.hpp>
 using namespace nondim;
 int main() {

@@ -1,7 +1,7 @@
 // Reference quantities whose dimensions are dependent: a viscosity is rho U L, so with rho, U
 // and L already given it fixes nothing new. The error names the fourth reference.
 // expect: nondim: the references' dimensions must be independent
-// expect: dependent_reference<4, nondim::spelled::dim<nondim::spelled::L<-1>, nondim::spelled::M<1>, .*T<-1>
+// expect: dependent_reference<4, nondim::spelled::named<nondim::spelled::kind::dynamic_viscosity_Pa_s, .*L<-1>, .*T<-1>
 #include <nondim/quantity.hpp>
 #include <nondim/solver.hpp>
 using namespace nondim;

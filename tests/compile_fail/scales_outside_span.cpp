@@ -1,7 +1,7 @@
 // A quantity whose dimension is outside the span of the references: with rho, U, L alone a
 // heat flux per kelvin (a heat-transfer coefficient) needs a temperature reference.
 // expect: nondim: this dimension is outside the span of the references
-// expect: references_lack<nondim::spelled::dim<nondim::spelled::Theta<1> ?> ?>
+// expect: references_lack<nondim::spelled::named<nondim::spelled::kind::temperature_K, .*Theta<1> ?> ?> ?>
 #include <nondim/quantity.hpp>
 #include <nondim/solver.hpp>
 using namespace nondim;

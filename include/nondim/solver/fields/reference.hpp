@@ -76,9 +76,11 @@ class field_reference {
   field_reference(const field_reference&) = default;
 
   /// \brief The element's value.
-  [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr value_type get() const noexcept { return value_type::from_si(*p_); }
+  [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr value_type get() const noexcept {
+    return value_type(*p_, detail::si_value_tag{});
+  }
   NONDIM_ALWAYS_INLINE constexpr operator value_type() const noexcept {  // NOLINT(google-explicit-constructor)
-    return value_type::from_si(*p_);
+    return value_type(*p_, detail::si_value_tag{});
   }
   /// \brief The element's value in coherent SI.
   [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr value_rep si() const noexcept { return *p_; }
@@ -102,7 +104,7 @@ class field_reference {
   /// Refused: a dimensional element is not a raw number.
   template <scalar T>
   requires(!D.is_dimensionless()) constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                   "nondim: a field element of a dimensional field cannot become a raw number; divide it by a "
                   "unit (`v[i] / units::Pa`) or read `v[i].si()`");
     return T{};
@@ -258,81 +260,78 @@ concept same_rep = std::same_as<std::remove_const_t<R1>, std::remove_const_t<R2>
 
 template <dimension D1, class R1, dimension D2, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, std::remove_const_t<R1>> operator*(
-    const field_reference<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
-  return quantity<D1 * D2, std::remove_const_t<R1>>::from_si(a.si() * b.si());
+    field_reference<D1, R1> a, field_reference<D2, R2> b) noexcept {
+  return quantity<D1 * D2, std::remove_const_t<R1>>(a.si() * b.si(), detail::si_value_tag{});
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, std::remove_const_t<R1>> operator/(
-    const field_reference<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
-  return quantity<D1 / D2, std::remove_const_t<R1>>::from_si(a.si() / b.si());
+    field_reference<D1, R1> a, field_reference<D2, R2> b) noexcept {
+  return quantity<D1 / D2, std::remove_const_t<R1>>(a.si() / b.si(), detail::si_value_tag{});
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, R2> operator*(
-    const field_reference<D1, R1>& a, const quantity<D2, R2>& b) noexcept {
-  return quantity<D1 * D2, R2>::from_si(a.si() * b.si());
+    field_reference<D1, R1> a, const quantity<D2, R2>& b) noexcept {
+  return quantity<D1 * D2, R2>(a.si() * b.si(), detail::si_value_tag{});
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, R2> operator/(
-    const field_reference<D1, R1>& a, const quantity<D2, R2>& b) noexcept {
-  return quantity<D1 / D2, R2>::from_si(a.si() / b.si());
+    field_reference<D1, R1> a, const quantity<D2, R2>& b) noexcept {
+  return quantity<D1 / D2, R2>(a.si() / b.si(), detail::si_value_tag{});
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, R1> operator*(
-    const quantity<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
-  return quantity<D1 * D2, R1>::from_si(a.si() * b.si());
+    quantity<D1, R1> a, field_reference<D2, R2> b) noexcept {
+  return quantity<D1 * D2, R1>(a.si() * b.si(), detail::si_value_tag{});
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, R1> operator/(
-    const quantity<D1, R1>& a, const field_reference<D2, R2>& b) noexcept {
-  return quantity<D1 / D2, R1>::from_si(a.si() / b.si());
+    quantity<D1, R1> a, field_reference<D2, R2> b) noexcept {
+  return quantity<D1 / D2, R1>(a.si() / b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R, scalar T>
-NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator*(T x,
-                                                                             const field_reference<D, R>& a) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator*(T x, field_reference<D, R> a) noexcept {
   using V = std::remove_const_t<R>;
-  return quantity<D, V>::from_si(static_cast<V>(x) * a.si());
+  return quantity<D, V>(static_cast<V>(x) * a.si(), detail::si_value_tag{});
 }
 template <dimension D, class R, scalar T>
-NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator*(const field_reference<D, R>& a,
-                                                                             T x) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator*(field_reference<D, R> a, T x) noexcept {
   using V = std::remove_const_t<R>;
-  return quantity<D, V>::from_si(a.si() * static_cast<V>(x));
+  return quantity<D, V>(a.si() * static_cast<V>(x), detail::si_value_tag{});
 }
 template <dimension D, class R, scalar T>
-NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator/(const field_reference<D, R>& a,
-                                                                             T x) noexcept {
+NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R>> operator/(field_reference<D, R> a, T x) noexcept {
   using V = std::remove_const_t<R>;
-  return quantity<D, V>::from_si(a.si() / static_cast<V>(x));
+  return quantity<D, V>(a.si() / static_cast<V>(x), detail::si_value_tag{});
 }
 template <dimension D, class R1, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R1>> operator+(
-    const field_reference<D, R1>& a, const field_reference<D, R2>& b) noexcept {
-  return quantity<D, std::remove_const_t<R1>>::from_si(a.si() + b.si());
+    field_reference<D, R1> a, field_reference<D, R2> b) noexcept {
+  return quantity<D, std::remove_const_t<R1>>(a.si() + b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R1, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, std::remove_const_t<R1>> operator-(
-    const field_reference<D, R1>& a, const field_reference<D, R2>& b) noexcept {
-  return quantity<D, std::remove_const_t<R1>>::from_si(a.si() - b.si());
+    field_reference<D, R1> a, field_reference<D, R2> b) noexcept {
+  return quantity<D, std::remove_const_t<R1>>(a.si() - b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R1, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R2> operator+(
-    const field_reference<D, R1>& a, const quantity<D, R2>& b) noexcept {
-  return quantity<D, R2>::from_si(a.si() + b.si());
+    field_reference<D, R1> a, const quantity<D, R2>& b) noexcept {
+  return quantity<D, R2>(a.si() + b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R1, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R2> operator-(
-    const field_reference<D, R1>& a, const quantity<D, R2>& b) noexcept {
-  return quantity<D, R2>::from_si(a.si() - b.si());
+    field_reference<D, R1> a, const quantity<D, R2>& b) noexcept {
+  return quantity<D, R2>(a.si() - b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R1, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R1> operator+(
-    const quantity<D, R1>& a, const field_reference<D, R2>& b) noexcept {
-  return quantity<D, R1>::from_si(a.si() + b.si());
+    quantity<D, R1> a, field_reference<D, R2> b) noexcept {
+  return quantity<D, R1>(a.si() + b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R1, class R2>
 requires detail::same_rep<R1, R2> NONDIM_ALWAYS_INLINE constexpr quantity<D, R1> operator-(
-    const quantity<D, R1>& a, const field_reference<D, R2>& b) noexcept {
-  return quantity<D, R1>::from_si(a.si() - b.si());
+    quantity<D, R1> a, field_reference<D, R2> b) noexcept {
+  return quantity<D, R1>(a.si() - b.si(), detail::si_value_tag{});
 }
 
 }  // namespace nondim

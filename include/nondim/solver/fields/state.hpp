@@ -179,20 +179,20 @@ consteval void check_counts() {
 // The diagnostics name the first component whose dimensions differ: its position, both
 // tags, both dimensions. (Computed in functions at namespace scope: GCC 12 crashes on these
 // spellings inside a member of a class template.)
-#define NONDIM_STATE_CHECK(NAME, MESSAGE)                                                                     \
-  template <class A, class B>                                                                                 \
-  consteval void NAME() {                                                                                     \
-    check_counts<A, B>();                                                                                     \
-    constexpr bool same_size = A::size == B::size;                                                            \
-    constexpr std::size_t at = same_size ? first_mismatch<A, B>() : A::size;                                  \
-    constexpr std::size_t shown = at < A::size ? at : 0;                                                      \
-    constexpr std::size_t shown_b = shown < B::size ? shown : 0;                                              \
-    constexpr dimension left = A::dims[shown];                                                                \
-    constexpr dimension right = B::dims[shown_b];                                                             \
-    static_assert(holds<(!same_size || at == A::size),                                                        \
-                        component_at<shown + 1, typename A::template component_type<shown>, spell<left>>,     \
-                        component_at<shown + 1, typename B::template component_type<shown_b>, spell<right>>>, \
-                  MESSAGE);                                                                                   \
+#define NONDIM_STATE_CHECK(NAME, MESSAGE)                                                                           \
+  template <class A, class B>                                                                                       \
+  consteval void NAME() {                                                                                           \
+    check_counts<A, B>();                                                                                           \
+    constexpr bool same_size = A::size == B::size;                                                                  \
+    constexpr std::size_t at = same_size ? first_mismatch<A, B>() : A::size;                                        \
+    constexpr std::size_t shown = at < A::size ? at : 0;                                                            \
+    constexpr std::size_t shown_b = shown < B::size ? shown : 0;                                                    \
+    constexpr dimension left = A::dims[shown];                                                                      \
+    constexpr dimension right = B::dims[shown_b];                                                                   \
+    static_assert(holds<(!same_size || at == A::size),                                                              \
+                        component_at<shown + 1, typename A::template component_type<shown>, spell_named<left>>,     \
+                        component_at<shown + 1, typename B::template component_type<shown_b>, spell_named<right>>>, \
+                  MESSAGE);                                                                                         \
   }
 
 NONDIM_STATE_CHECK(check_assignable,
@@ -340,15 +340,28 @@ class state_ref {
   }
 
   /// \brief Component I (by position) or Tag of this cell.
+  /// Each computes the address itself, with no call to another member: a debug build (-O0)
+  /// pays for every inlined layer.
   template <std::size_t I>
   NONDIM_ALWAYS_INLINE constexpr auto get() const noexcept {
     static_assert(I < size, "nondim: component index out of range");
-    return field_reference<Set::dims[I], Rep>(at(I));
+    if constexpr (soa) {
+      return field_reference<Set::dims[I], Rep>(p_ + I * step_);
+    } else {
+      return field_reference<Set::dims[I], Rep>(p_ + I);
+    }
   }
   template <class Tag>
   NONDIM_ALWAYS_INLINE constexpr auto get() const noexcept {
     detail::check_component<Set, Tag>();
-    return get<Set::template index_of<Tag>>();
+    constexpr std::size_t i = Set::template index_of<Tag>;
+    if constexpr (i >= size) {
+      return;  // refused above
+    } else if constexpr (soa) {
+      return field_reference<Set::dims[i], Rep>(p_ + i * step_);
+    } else {
+      return field_reference<Set::dims[i], Rep>(p_ + i);
+    }
   }
 
   /// \brief Stores a state of the same dimensions, component by component.

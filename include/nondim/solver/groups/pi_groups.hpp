@@ -232,7 +232,7 @@ constexpr bool product_is_dimensionless() {
   constexpr product_dimension<Dims.size()> product = dimension_of_product(Dims, Exps);
   constexpr dimension dim = product.dim;
   static_assert(!product.overflow, "nondim: the dimension of this product overflows 64-bit rational exponents");
-  static_assert(holds<(product.overflow || dim == dimension{}), spell<dim>>,
+  static_assert(holds<(product.overflow || dim == dimension{}), spell_named<dim>>,
                 "nondim: this product of powers is not dimensionless, so it is no group; its dimension is "
                 "shown (dim<...>): change the exponents");
   return true;

@@ -166,7 +166,7 @@ constexpr bool references_are_independent() {
   constexpr reference_check check = reference_check_v<R...>;
   constexpr std::size_t bad = check.overflow ? 0 : check.first_dependent;
   constexpr dimension bad_dim = dimension_list<R...>[bad];
-  static_assert(holds<(check.overflow || bad == sizeof...(R)), dependent_reference<(bad + 1), spell<bad_dim>>>,
+  static_assert(holds<(check.overflow || bad == sizeof...(R)), dependent_reference<(bad + 1), spell_named<bad_dim>>>,
                 "nondim: the references' dimensions must be independent; the reference at the position shown "
                 "is a product of powers of those before it (drop it, or replace it by one that brings a new "
                 "base dimension)");
@@ -182,10 +182,11 @@ constexpr std::array<rational, sizeof...(R)> scale_exponents() {
   constexpr auto& sol = span_solution_v<D, R...>;
   constexpr std::size_t lack = sol.lacking_base;
   constexpr dimension lacking = make_base(static_cast<base_dimension>(lack < base_dimension_count ? lack : 0));
-  static_assert(holds<(sol.in_span || lack == base_dimension_count), references_lack<spell<lacking>>, spell<D>>,
-                "nondim: this dimension is outside the span of the references: they lack the base dimension "
-                "shown (references_lack<...>, then the dimension asked for); add a reference that carries it");
-  static_assert(holds<(sol.in_span || lack != base_dimension_count), spell<D>, spell<R>...>,
+  static_assert(
+      holds<(sol.in_span || lack == base_dimension_count), references_lack<spell_named<lacking>>, spell_named<D>>,
+      "nondim: this dimension is outside the span of the references: they lack the base dimension "
+      "shown (references_lack<...>, then the dimension asked for); add a reference that carries it");
+  static_assert(holds<(sol.in_span || lack != base_dimension_count), spell_named<D>, spell_named<R>...>,
                 "nondim: this dimension (first) is not a product of powers of the references (after it); no "
                 "single added base dimension would make it one");
   static_assert(holds<!sol.overflow, spell<D>, spell<R>...>,

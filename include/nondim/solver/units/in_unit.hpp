@@ -93,7 +93,7 @@ value_in_unit in_unit(const quantity<D, R>& q, const unit<D>& u, std::string_vie
 /// Refused: a unit of another dimension.
 template <dimension D, class R, dimension D2, class... A>
 requires(D != D2) value_in_unit in_unit(const quantity<D, R>&, const unit<D2>&, A&&...) {
-  static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                 "nondim: cannot write a quantity in a unit of another dimension (the quantity's dimension "
                 "first, the unit's second)");
   return {};

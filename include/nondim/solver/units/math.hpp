@@ -129,19 +129,19 @@ NONDIM_ALWAYS_INLINE constexpr quantity<D, R> hypot(const quantity<D, R>& a, con
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires(D1 != D2) constexpr quantity<D1, R1> hypot(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: hypot needs two quantities of the same dimension");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires(D1 != D2) constexpr quantity<D1, R1> min(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: min needs two quantities of the same dimension");
   return {};
 }
 template <dimension D1, class R1, dimension D2, class R2>
 requires(D1 != D2) constexpr quantity<D1, R1> max(const quantity<D1, R1>&, const quantity<D2, R2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: max needs two quantities of the same dimension");
   return {};
 }
@@ -154,7 +154,7 @@ requires(D1 != D2) constexpr quantity<D1, R1> max(const quantity<D1, R1>&, const
   }                                                                                                     \
   template <dimension D, class R>                                                                       \
   requires(!D.is_dimensionless()) inline R fn(const quantity<D, R>&) noexcept {                         \
-    static_assert(detail::dimensions_involved<detail::spell<D>>,                                        \
+    static_assert(detail::dimensions_involved<detail::spell_named<D>>,                                  \
                   "nondim: " #fn " needs a dimensionless argument; divide by a reference scale first"); \
     return R{};                                                                                         \
   }

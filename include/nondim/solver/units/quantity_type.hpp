@@ -17,6 +17,12 @@ template <dimension D, class Rep = double>
 class quantity;
 
 namespace detail {
+/// Selects the constructor that takes a value in coherent SI as it is: what the operators use,
+/// one inlined layer fewer than `from_si` (a debug build pays for each layer). Not for users:
+/// their way to say "this number is SI" is `from_si`.
+struct si_value_tag {
+  explicit si_value_tag() = default;
+};
 template <class T>
 struct is_quantity : std::false_type {};
 template <dimension D, class R>
@@ -58,7 +64,7 @@ struct no_number_conversion {
   template <class T>
   requires std::is_arithmetic_v<T>
   constexpr operator T() const noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                   "nondim: a dimensional quantity cannot become a raw number; divide it by a unit "
                   "(`q / units::m`) or read `q.si()`");
     return T{};
@@ -81,8 +87,10 @@ class quantity : public detail::quantity_base<D, Rep> {
 
   /// \brief A quantity from its value in coherent SI units.
   [[nodiscard]] NONDIM_ALWAYS_INLINE static constexpr quantity from_si(Rep si_value) noexcept {
-    return quantity(si_value, tag{});
+    return quantity(si_value, detail::si_value_tag{});
   }
+  /// \brief A quantity from its value in coherent SI units (the operators' form of `from_si`).
+  NONDIM_ALWAYS_INLINE constexpr quantity(Rep si_value, detail::si_value_tag) noexcept : value_(si_value) {}
 
   /// \brief A dimensionless value from a number (implicit: it is a number).
   NONDIM_ALWAYS_INLINE constexpr quantity(Rep v) noexcept  // NOLINT(google-explicit-constructor)
@@ -92,7 +100,7 @@ class quantity : public detail::quantity_base<D, Rep> {
   /// Refused: a raw number has no unit. Multiply it by one, or say it is SI.
   template <scalar T>
   requires(!D.is_dimensionless()) constexpr quantity(T) noexcept {  // NOLINT(google-explicit-constructor)
-    static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                   "nondim: a raw number cannot become a dimensional quantity; write `x * units::m` "
                   "(its unit) or `quantity<D>::from_si(x)`");
   }
@@ -115,7 +123,9 @@ class quantity : public detail::quantity_base<D, Rep> {
   [[nodiscard]] NONDIM_ALWAYS_INLINE constexpr Rep si() const noexcept { return value_; }
 
   NONDIM_ALWAYS_INLINE constexpr quantity operator+() const noexcept { return *this; }
-  NONDIM_ALWAYS_INLINE constexpr quantity operator-() const noexcept { return from_si(-value_); }
+  NONDIM_ALWAYS_INLINE constexpr quantity operator-() const noexcept {
+    return quantity(-value_, detail::si_value_tag{});
+  }
 
   NONDIM_ALWAYS_INLINE constexpr quantity& operator+=(const quantity& o) noexcept {
     value_ += o.value_;
@@ -137,20 +147,18 @@ class quantity : public detail::quantity_base<D, Rep> {
   }
   template <dimension D2, class R2>
   requires(D2 != D) constexpr quantity& operator+=(const quantity<D2, R2>&) noexcept {
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot add a quantity of another dimension");
     return *this;
   }
   template <dimension D2, class R2>
   requires(D2 != D) constexpr quantity& operator-=(const quantity<D2, R2>&) noexcept {
-    static_assert(detail::dimensions_involved<detail::spell<D>, detail::spell<D2>>,
+    static_assert(detail::dimensions_involved<detail::spell_named<D>, detail::spell_named<D2>>,
                   "nondim: cannot subtract a quantity of another dimension");
     return *this;
   }
 
  private:
-  struct tag {};
-  NONDIM_ALWAYS_INLINE constexpr quantity(Rep v, tag) noexcept : value_(v) {}
   Rep value_{};
 };
 
@@ -158,11 +166,11 @@ class quantity : public detail::quantity_base<D, Rep> {
 
 template <dimension D, class R>
 NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator+(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
-  return quantity<D, R>::from_si(a.si() + b.si());
+  return quantity<D, R>(a.si() + b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R>
 NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator-(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
-  return quantity<D, R>::from_si(a.si() - b.si());
+  return quantity<D, R>(a.si() - b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R>
 NONDIM_ALWAYS_INLINE constexpr bool operator==(const quantity<D, R>& a, const quantity<D, R>& b) noexcept {
@@ -205,34 +213,34 @@ requires(D1 != D2) constexpr std::partial_ordering operator<=>(const quantity<D1
 template <dimension D1, dimension D2, class R>
 NONDIM_ALWAYS_INLINE constexpr quantity<D1 * D2, R> operator*(const quantity<D1, R>& a,
                                                               const quantity<D2, R>& b) noexcept {
-  return quantity<D1 * D2, R>::from_si(a.si() * b.si());
+  return quantity<D1 * D2, R>(a.si() * b.si(), detail::si_value_tag{});
 }
 template <dimension D1, dimension D2, class R>
 NONDIM_ALWAYS_INLINE constexpr quantity<D1 / D2, R> operator/(const quantity<D1, R>& a,
                                                               const quantity<D2, R>& b) noexcept {
-  return quantity<D1 / D2, R>::from_si(a.si() / b.si());
+  return quantity<D1 / D2, R>(a.si() / b.si(), detail::si_value_tag{});
 }
 template <dimension D, class R, scalar T>
 NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator*(const quantity<D, R>& a, T s) noexcept {
-  return quantity<D, R>::from_si(a.si() * static_cast<R>(s));
+  return quantity<D, R>(a.si() * static_cast<R>(s), detail::si_value_tag{});
 }
 template <dimension D, class R, scalar T>
 NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator*(T s, const quantity<D, R>& a) noexcept {
-  return quantity<D, R>::from_si(static_cast<R>(s) * a.si());
+  return quantity<D, R>(static_cast<R>(s) * a.si(), detail::si_value_tag{});
 }
 template <dimension D, class R, scalar T>
 NONDIM_ALWAYS_INLINE constexpr quantity<D, R> operator/(const quantity<D, R>& a, T s) noexcept {
-  return quantity<D, R>::from_si(a.si() / static_cast<R>(s));
+  return quantity<D, R>(a.si() / static_cast<R>(s), detail::si_value_tag{});
 }
 template <dimension D, class R, scalar T>
 NONDIM_ALWAYS_INLINE constexpr quantity<dims::dimensionless / D, R> operator/(T s, const quantity<D, R>& a) noexcept {
-  return quantity<dims::dimensionless / D, R>::from_si(static_cast<R>(s) / a.si());
+  return quantity<dims::dimensionless / D, R>(static_cast<R>(s) / a.si(), detail::si_value_tag{});
 }
 
 /// \brief A quantity whose type is deduced from a dimension value: `si<dims::force>(12.0)`.
 template <dimension D, class Rep>
 NONDIM_ALWAYS_INLINE constexpr quantity<D, Rep> si(Rep value) noexcept {
-  return quantity<D, Rep>::from_si(value);
+  return quantity<D, Rep>(value, detail::si_value_tag{});
 }
 
 }  // namespace nondim
@@ -243,37 +251,37 @@ namespace nondim {
 // named (without these, the built-in operators would be tried and fail as an ambiguity).
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator+(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator+(T, const quantity<D, R>&) noexcept {
-  static_assert(detail::dimensions_involved<T, detail::spell<D>>,
+  static_assert(detail::dimensions_involved<T, detail::spell_named<D>>,
                 "nondim: cannot add a raw number to a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator-(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot subtract a raw number from a dimensional quantity; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr quantity<D, R> operator-(T, const quantity<D, R>&) noexcept {
-  static_assert(detail::dimensions_involved<T, detail::spell<D>>,
+  static_assert(detail::dimensions_involved<T, detail::spell_named<D>>,
                 "nondim: cannot subtract a dimensional quantity from a raw number; give the number a unit");
   return {};
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr bool operator==(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
   return false;
 }
 template <dimension D, class R, scalar T>
 requires(!D.is_dimensionless()) constexpr std::partial_ordering operator<=>(const quantity<D, R>&, T) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D>, T>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D>, T>,
                 "nondim: cannot compare a dimensional quantity with a raw number; give the number a unit");
   return std::partial_ordering::unordered;
 }

@@ -65,7 +65,7 @@ NONDIM_ALWAYS_INLINE constexpr R in(const quantity<D, R>& q, const unit<D>& u) n
 /// Refused: reading a quantity in a unit of another dimension.
 template <dimension D1, class R, dimension D2>
 requires(D1 != D2) constexpr R in(const quantity<D1, R>&, const unit<D2>&) noexcept {
-  static_assert(detail::dimensions_involved<detail::spell<D1>, detail::spell<D2>>,
+  static_assert(detail::dimensions_involved<detail::spell_named<D1>, detail::spell_named<D2>>,
                 "nondim: cannot read a quantity in a unit of another dimension (quantity first, unit second)");
   return R{};
 }
