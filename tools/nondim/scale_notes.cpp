@@ -27,17 +27,14 @@ std::string regime_phrase(const regime_note& n) {
          detail::band_text(n) + ")";
 }
 
-bool is_dim(const dimension& d, const dimension& want) {
-  return d == want;
-}
-
 }  // namespace
 
 std::vector<std::string> regime_change_notes(const similarity_plan& plan, const analysis& a) {
   std::vector<std::string> out;
   for (std::size_t k = 0; k < plan.groups.size() && k < a.groups.size(); ++k) {
     const group_plan& g = plan.groups[k];
-    if (g.holds_dependent || !g.prototype || !g.model) continue;
+    // a matched group is in the prototype's regime by definition (a band edge must not split it by rounding)
+    if (g.holds_dependent || g.matched || !g.prototype || !g.model) continue;
     const auto prototype = regime_notes(a.groups[k].matches, *g.prototype, a.configuration);
     const auto model = regime_notes(a.groups[k].matches, *g.model, a.configuration);
     for (std::size_t i = 0; i < prototype.size() && i < model.size(); ++i) {
@@ -64,8 +61,8 @@ std::vector<std::string> compressibility_notes(const similarity_plan& plan, cons
     if (v.kind == "speed_of_sound") return out;
     const auto& model = plan.variables[j].model;
     if (!model || plan.variables[j].dependent) continue;
-    if (is_dim(v.dim, density) && v.factor * *model > liquid_density) return out;  // a liquid
-    if (is_dim(v.dim, temperature) && !thermometer) thermometer = j;
+    if (v.dim == density && v.factor * *model > liquid_density) return out;  // a liquid
+    if (v.dim == temperature && !thermometer) thermometer = j;
   }
   // the speed of sound of air at the model's (or the prototype's) temperature
   const auto sound_at = [&](bool model) {
@@ -87,7 +84,7 @@ std::vector<std::string> compressibility_notes(const similarity_plan& plan, cons
   for (std::size_t j = 0; j < a.variables.size() && j < plan.variables.size(); ++j) {
     const variable& v = a.variables[j];
     const variable_plan& vp = plan.variables[j];
-    if (vp.dependent || !vp.model || !is_dim(v.dim, velocity)) continue;
+    if (vp.dependent || !vp.model || v.dim != velocity) continue;
     const double ma = v.factor * *vp.model / sound;
     if (!(ma > limit)) continue;
     std::string s = "the model's " + v.name + " = " + three_digits(*vp.model) + " " + v.unit + " is Mach " +

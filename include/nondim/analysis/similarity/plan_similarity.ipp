@@ -391,10 +391,16 @@ inline std::optional<double> log_sensitivity(const similarity_problem& p, std::s
   similarity_problem q = p;
   std::optional<double>& x = model ? q.variables[j].model : q.variables[j].prototype;
   const double x0 = *x;
-  x = x0 * std::exp(step);
-  const auto up = plan_values(q).dependent.prototype_over_model;
-  x = x0 * std::exp(-step);
-  const auto down = plan_values(q).dependent.prototype_over_model;
+  std::optional<double> up;
+  std::optional<double> down;
+  try {
+    x = x0 * std::exp(step);
+    up = plan_values(q).dependent.prototype_over_model;
+    x = x0 * std::exp(-step);
+    down = plan_values(q).dependent.prototype_over_model;
+  } catch (const similarity_error&) {
+    return std::nullopt;  // a value at the edge of double's range: no difference to take
+  }
   if (!up || !down) return std::nullopt;
   return (std::log(*up) - std::log(*down)) / (2.0 * step);
 }
@@ -424,7 +430,8 @@ inline void propagate_uncertainty(const similarity_problem& p, similarity_plan& 
       const std::optional<double>& x = model ? v.model : v.prototype;
       if (!x) continue;
       const auto s = log_sensitivity(p, j, model);
-      if (!s || std::abs(*s) < negligible) continue;
+      if (!s) return;  // no uncertainty rather than one that leaves an input out
+      if (std::abs(*s) < negligible) continue;
       const std::optional<double>& u = model ? v.model_uncertainty : v.prototype_uncertainty;
       if (!u) {
         dp.lacking_uncertainty.push_back(cat(v.name, model ? " (model)" : " (prototype)"));
