@@ -206,6 +206,56 @@ TEST_SUITE("data") {
     }
   }
 
+  TEST_CASE("a configuration keeps the notes to its own thresholds") {
+    const group_match re{"Reynolds number", "Re", rational{1}};
+    const auto configurations = [](const std::vector<regime_note>& notes) {
+      std::vector<std::string> out;
+      for (const auto& n : notes) out.emplace_back(n.configuration.substr(0, n.configuration.find(',')));
+      return out;
+    };
+    // none chosen: the usual pipe and flat plate, not the cylinder's or the sphere's bands
+    CHECK(configurations(regime_notes({re}, 5e4)) ==
+          std::vector<std::string>{"flow in a circular pipe", "boundary layer on a flat plate"});
+    CHECK(configurations(regime_notes({re}, 5e4, "pipe_flow")) == std::vector<std::string>{"flow in a circular pipe"});
+    // a cylinder in crossflow: transition of the boundary layer near Re_D = 2e5 (Incropera et
+    // al., section 7.4); below it vortex shedding with a laminar boundary layer
+    const auto cylinder = regime_notes({re}, 5e4, "cylinder_crossflow");
+    REQUIRE(cylinder.size() == 1);
+    CHECK(cylinder[0].regime.substr(0, 15) == "vortex shedding");
+    CHECK(regime_notes({re}, 3e5, "cylinder_crossflow")[0].regime.substr(0, 25) == "boundary-layer transition");
+    // a sphere: Stokes flow below Re = 1, Newton's regime 1e3 .. 2e5 (White, section 7.6, from memory)
+    CHECK(regime_notes({re}, 0.1, "sphere")[0].regime.substr(0, 8) == "creeping");
+    CHECK(regime_notes({re}, 5e4, "sphere")[0].regime.substr(0, 15) == "Newton's regime");
+    // a rule of any configuration stays: Mach 0.5 in a pipe is still compressible
+    CHECK(regime_notes({group_match{"Mach number", "Ma", rational{1}}}, 0.5, "pipe_flow").size() == 1);
+    // another configuration's number says nothing: Ra on a vertical plate is not a sphere's
+    CHECK(regime_notes({group_match{"Rayleigh number", "Ra", rational{1}}}, 1e10, "sphere").empty());
+    CHECK(regime_notes({group_match{"Rayleigh number", "Ra", rational{1}}}, 1e10, "vertical_plate").size() == 1);
+    CHECK_THROWS_AS((void)regime_notes({re}, 5e4, "pipe"), analysis_error);
+    CHECK(is_regime_configuration("open_channel"));
+    CHECK_FALSE(is_regime_configuration("Pipe_Flow"));
+    CHECK(regime_configuration_list().find("pipe_flow, flat_plate, cylinder_crossflow, sphere") == 0);
+    // every rule's key is a configuration, and only the rules of any configuration have none
+    for (const regime_rule& r : regime_table)
+      CHECK((r.scope == regime_scope::any ? r.key.empty() : is_regime_configuration(r.key)));
+  }
+
+  TEST_CASE("the analysis carries its configuration into the reports") {
+    problem p;
+    p.add("dp", "Pa").add("rho", "kg/m^3").add("U", "m/s").add("D", "mm").add("mu", "mPa*s");
+    options o;
+    o.configuration = "sphere";
+    const analysis a = analyze(p, o);
+    CHECK(a.configuration == "sphere");
+    report_options r;
+    r.point.set(p, "rho", 998).set(p, "U", 2).set(p, "D", 25).set(p, "mu", 1);
+    // Re = 998 * 2 * 0.025 / 0.001 = 49900: Newton's regime of a sphere (White, 7.6, from memory)
+    const std::string text = text_report(a, r);
+    CHECK(contains(text, "Newton's regime"));
+    CHECK_FALSE(contains(text, "circular pipe"));
+    CHECK(contains(json_report(a, r), "flow past a sphere"));
+  }
+
   TEST_CASE("the reports show values, uncertainties and regime notes at a design point") {
     // Mach number of a gas flow: U/c (ISO 80000-11)
     problem p;

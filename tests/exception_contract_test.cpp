@@ -451,6 +451,10 @@ TEST_SUITE("exception contracts") {
         p.add_group({1, -1, -2, -2, 0}, "C_F").add_group({0, 1, 1, 1, -1}, "Re").add_group({e, e, 0, e, e});
         p.priority = {1, static_cast<std::size_t>(e)};
         p.tolerance = x;
+        // standard uncertainties at the extremes too: the propagation plans perturbed values
+        p.variables[1].prototype_uncertainty = x;
+        p.variables[3].prototype_uncertainty = 0.01;
+        p.variables[3].model_uncertainty = x;
         similarity_plan plan;
         if (expect_only<similarity_error>("plan_similarity", [&] { plan = plan_similarity(p); }) == outcome::returned)
           expect_only<>("to_text", [&] { (void)to_text(plan); });

@@ -217,6 +217,88 @@ TEST_SUITE("similarity") {
     CHECK(text.find("skin-friction correction") != std::string::npos);
   }
 
+  TEST_CASE("the scale-up factor of a Froude model has the GUM uncertainty of (rho_p/rho_m) lambda^3 (g_p/g_m)") {
+    // Froude's law with V_m = V_p sqrt(L_m g_m / (L_p g_p)) gives R_p/R_m = (rho_p/rho_m)
+    // (L_p/L_m)^3 (g_p/g_m) (White sec. 5.5, from memory); by GUM eq. 12 its relative standard
+    // uncertainty is sqrt(u_rho_p^2 + u_rho_m^2 + 9 u_L_p^2 + 9 u_L_m^2 + u_g_p^2 + u_g_m^2) in
+    // relative terms (JCGM 100:2008, 5.1.6: a product of powers). V_p drops out: it needs none.
+    auto p = ship_problem();
+    p.priority = {1};  // Fr
+    p.variables[1].prototype_uncertainty = 2.0;
+    p.variables[1].model_uncertainty = 0.5;
+    p.variables[3].prototype_uncertainty = 0.5;
+    p.variables[3].model_uncertainty = 0.005;
+    p.variables[4].prototype_uncertainty = 0.02e-3;
+    p.variables[4].model_uncertainty = 0.02e-3;
+    p.variables[5].prototype_uncertainty = 0.001;
+    p.variables[5].model_uncertainty = 0.001;
+    p.variables[0].model = 52.0;
+    p.variables[0].model_uncertainty = 0.4;
+    const auto plan = plan_similarity(p);
+    const double rel =
+        std::sqrt(std::pow(2.0 / rho_sea_15C, 2) + std::pow(0.5 / rho_fresh_15C, 2) + 9 * std::pow(0.5 / 135.0, 2) +
+                  9 * std::pow(0.005 / 4.5, 2) + 2 * std::pow(0.001 / g_n, 2));
+    const double factor = (rho_sea_15C / rho_fresh_15C) * std::pow(30.0, 3);
+    REQUIRE(plan.dependent.prototype_over_model_uncertainty);
+    CHECK(close(*plan.dependent.prototype_over_model_uncertainty, factor * rel, 1e-8));
+    CHECK(plan.dependent.lacking_uncertainty.empty());  // mu matters to no factor: Re is not matched
+    // the predicted resistance adds the measured value's own: u(R_p)/R_p = sqrt(rel^2 + (0.4/52)^2)
+    const auto& r_plan = *plan.find("R");
+    REQUIRE(r_plan.prototype_uncertainty);
+    CHECK(close(*r_plan.prototype_uncertainty, factor * 52.0 * std::sqrt(rel * rel + std::pow(0.4 / 52.0, 2)), 1e-8));
+    CHECK(close(*plan.find("rho")->prototype_uncertainty, 2.0));
+    CHECK(to_text(plan).find("(standard uncertainty ") != std::string::npos);
+  }
+
+  TEST_CASE("a factor that depends on a value without an uncertainty gets none, and says which") {
+    auto p = ship_problem();
+    p.priority = {1};
+    p.variables[1].prototype_uncertainty = 2.0;  // rho_p only
+    const auto plan = plan_similarity(p);
+    CHECK_FALSE(plan.dependent.prototype_over_model_uncertainty);
+    CHECK(plan.dependent.lacking_uncertainty ==
+          std::vector<std::string>{"rho (model)", "L (prototype)", "L (model)", "g (prototype)", "g (model)"});
+    CHECK(to_text(plan).find("no uncertainty for the factor: rho (model), L (prototype)") != std::string::npos);
+    // none given at all: nothing to say
+    const auto bare = plan_similarity(ship_problem());
+    CHECK(bare.dependent.lacking_uncertainty.empty());
+    CHECK_FALSE(bare.dependent.prototype_over_model_uncertainty);
+  }
+
+  TEST_CASE("an uncertainty without its value, negative or not finite is refused with the variable named") {
+    auto p = ship_problem();
+    p.variables[2].model_uncertainty = 0.1;  // V has no model value
+    check_names(p, "V", "uncertainty of its model value but no model value");
+    p = ship_problem();
+    p.variables[1].prototype_uncertainty = -1.0;
+    check_names(p, "rho", "must be a finite number >= 0");
+    p = ship_problem();
+    p.variables[1].model_uncertainty = std::numeric_limits<double>::infinity();
+    check_names(p, "rho", "must be a finite number >= 0");
+    p = ship_problem();
+    p.variables[0].prototype_uncertainty = 1.0;  // the dependent variable has no prototype value
+    check_names(p, "R", "uncertainty of its prototype value but no prototype value");
+  }
+
+  TEST_CASE("a group of given values alone is fixed, not a least-squares compromise") {
+    // every model value given (the ship at its Froude speed): Re cannot match, and nothing was fitted
+    auto p = ship_problem();
+    p.variables[2].model = 7.5 * std::sqrt(4.5 / 135.0);
+    const auto fixed = plan_similarity(p);
+    REQUIRE(fixed.status == similarity_status::partial);
+    for (const auto& n : fixed.notes) CHECK_MESSAGE(n.find("least-squares compromise") == std::string::npos, n);
+    bool said = false;
+    for (const auto& n : fixed.notes)
+      said = said || n.find("Re cannot match: every value in it is given") != std::string::npos;
+    CHECK(said);
+    // the speed to find: Fr and Re share the mismatch, a compromise
+    const auto shared = plan_similarity(ship_problem());
+    bool compromise = false;
+    for (const auto& n : shared.notes)
+      compromise = compromise || n.find("least-squares compromise") != std::string::npos;
+    CHECK(compromise);
+  }
+
   TEST_CASE("without a priority list the conflicting groups share the mismatch in the least-squares sense") {
     const auto p = ship_problem();
     const auto plan = plan_similarity(p);

@@ -280,8 +280,28 @@ def check_convert(v, problems):
         problems.append("notes: must be a list of sentences")
 
 
+def check_measured(obj, key, where, problems):
+    """`key` a number or null; `key_uncertainty`, only beside a number, a number >= 0 with at
+    most two significant digits (GUM 7.2.6)."""
+    x = obj.get(key)
+    if not (is_number(x) or x is None):
+        problems.append("%s.%s: must be a number or null" % (where, key))
+    u = obj.get(key + "_uncertainty")
+    if u is None:
+        return
+    if x is None:
+        problems.append("%s.%s_uncertainty: an uncertainty without a value" % (where, key))
+    if not is_number(u) or u < 0:
+        problems.append("%s.%s_uncertainty: not a number >= 0" % (where, key))
+    elif u > 0 and len(("%.15g" % u).replace(".", "").replace("-", "").split("e")[0].strip("0")) > 2:
+        problems.append("%s.%s_uncertainty: %r has more than two significant digits" % (where, key, u))
+
+
 def check_scale(v, problems):
-    if not keys(v, "root", ["status", "model", "free", "groups", "dependent"], [], problems):
+    """scale --format json: the plan's status, the model values found, the groups (a label
+    where the catalog names the group, else null), the dependent variable's factor, measured
+    and predicted values with their standard uncertainties, and the notes."""
+    if not keys(v, "root", ["status", "model", "free", "groups", "dependent", "notes"], [], problems):
         return
     if v["status"] not in ("exact", "partial", "underdetermined"):
         problems.append("status: %r" % v["status"])
@@ -293,7 +313,11 @@ def check_scale(v, problems):
         problems.append("free: must be non-empty exactly when the status is underdetermined")
     for i, g in enumerate(v["groups"] if isinstance(v["groups"], list) else []):
         w = "groups[%d]" % i
-        if keys(g, w, ["exponents", "prototype", "model", "ratio", "matched"], [], problems):
+        if keys(g, w, ["label", "text", "exponents", "prototype", "model", "ratio", "matched"], [], problems):
+            if not (g["label"] is None or (isinstance(g["label"], str) and g["label"])):
+                problems.append("%s.label: must be a name or null" % w)
+            if not isinstance(g["text"], str) or not g["text"]:
+                problems.append("%s.text: must be the product written out" % w)
             for name, e in g["exponents"].items():
                 exponent(e, "%s.exponents.%s" % (w, name), problems)
             for k in ("prototype", "model", "ratio"):
@@ -302,14 +326,125 @@ def check_scale(v, problems):
             if not isinstance(g["matched"], bool):
                 problems.append("%s.matched: must be a boolean" % w)
     d = v["dependent"]
-    if keys(d, "dependent", ["name", "prototype_over_model"], ["approximate"], problems):
-        if not isinstance(d["name"], str) or not (is_number(d["prototype_over_model"]) or d["prototype_over_model"] is None):
-            problems.append("dependent: name must be a string, prototype_over_model a number")
+    if keys(d, "dependent", ["name", "unit", "prototype_over_model", "exact", "rule", "measured", "predicted"],
+            ["prototype_over_model_uncertainty", "measured_uncertainty", "predicted_uncertainty"], problems):
+        if not isinstance(d["name"], str) or not isinstance(d["unit"], str):
+            problems.append("dependent: name and unit must be strings")
+        if not isinstance(d["exact"], bool):
+            problems.append("dependent.exact: must be a boolean")
+        if not (d["rule"] is None or isinstance(d["rule"], str)):
+            problems.append("dependent.rule: must be a string or null")
+        for k in ("prototype_over_model", "measured", "predicted"):
+            check_measured(d, k, "dependent", problems)
+        if d["predicted"] is not None and (d["measured"] is None or d["prototype_over_model"] is None):
+            problems.append("dependent.predicted: needs a measured value and a factor")
+    if not isinstance(v["notes"], list) or not all(isinstance(n, str) and n for n in v["notes"]):
+        problems.append("notes: must be a list of sentences")
+
+
+def check_interval(obj, value_key, where, problems):
+    """`ci95` a [low, high] pair around obj[value_key]."""
+    ci = obj.get("ci95")
+    x = obj.get(value_key)
+    if not (isinstance(ci, list) and len(ci) == 2 and all(is_number(c) for c in ci)):
+        problems.append("%s.ci95: must be [low, high]" % where)
+    elif is_number(x) and not ci[0] <= x <= ci[1]:
+        problems.append("%s.ci95: %r does not hold the estimate %r" % (where, ci, x))
+
+
+def check_fit(v, problems):
+    """fit --format json (DESIGN.md): the fitted dependent group as C times powers of the
+    others, with standard errors and 95 % intervals; R^2 of the logarithms; the relative
+    deviations; the range of every group; beyond DESIGN.md, the degrees of freedom n - p,
+    whether the rows were weighted, the shares within 10 % and 20 %, the flagged rows."""
+    if not keys(v, "root", ["basis", "n", "dependent", "coefficient", "terms", "constant", "r2", "rms_relative",
+                            "max_relative", "range", "dof", "weighted", "within_10", "within_20", "outliers"], [],
+                problems):
+        return
+    if v["basis"] not in ("classical", "named"):
+        problems.append("basis: %r is neither 'classical' nor 'named'" % (v["basis"],))
+    n = v["n"]
+    if not isinstance(n, int) or isinstance(n, bool) or n < 1:
+        problems.append("n: not a positive integer")
+        return
+    symbols = []
+    d = v["dependent"]
+    if keys(d, "dependent", ["exponents", "symbol"], [], problems):
+        for name, e in d["exponents"].items():
+            exponent(e, "dependent.exponents.%s" % name, problems)
+        symbols.append(d["symbol"])
+    c = v["coefficient"]
+    if keys(c, "coefficient", ["value", "std_error", "ci95"], [], problems):
+        if not (is_number(c["value"]) and c["value"] > 0):
+            problems.append("coefficient.value: must be a number > 0")
+        if not (is_number(c["std_error"]) and c["std_error"] >= 0):
+            problems.append("coefficient.std_error: must be a number >= 0")
+        check_interval(c, "value", "coefficient", problems)
+    free = 0
+    for i, t in enumerate(v["terms"] if isinstance(v["terms"], list) else []):
+        w = "terms[%d]" % i
+        if not keys(t, w, ["exponents", "symbol", "exponent", "std_error", "ci95", "fixed"], [], problems):
+            continue
+        for name, e in t["exponents"].items():
+            exponent(e, "%s.exponents.%s" % (w, name), problems)
+        if not isinstance(t["fixed"], bool) or not is_number(t["exponent"]):
+            problems.append("%s: fixed must be a boolean and exponent a number" % w)
+            continue
+        if not (is_number(t["std_error"]) and t["std_error"] >= 0):
+            problems.append("%s.std_error: must be a number >= 0" % w)
+        if t["fixed"] and t["std_error"] != 0:
+            problems.append("%s: a held exponent has no standard error" % w)
+        free += 0 if t["fixed"] else 1
+        check_interval(t, "exponent", w, problems)
+        symbols.append(t["symbol"])
+    for i, k in enumerate(v["constant"] if isinstance(v["constant"], list) else []):
+        w = "constant[%d]" % i
+        if keys(k, w, ["exponents", "symbol", "value"], [], problems):
+            if not (is_number(k["value"]) and k["value"] > 0):
+                problems.append("%s.value: must be a number > 0" % w)
+            symbols.append(k["symbol"])
+    # p = the coefficient and the free exponents; Student's t with n - p degrees of freedom
+    if v["dof"] != n - 1 - free:
+        problems.append("dof: %r, but n - p = %d - %d" % (v["dof"], n, 1 + free))
+    if not (is_number(v["r2"]) and v["r2"] <= 1 + 1e-12):
+        problems.append("r2: must be a number <= 1")
+    for k in ("rms_relative", "max_relative"):
+        if not (is_number(v[k]) and v[k] >= 0):
+            problems.append("%s: must be a number >= 0" % k)
+    if is_number(v["rms_relative"]) and is_number(v["max_relative"]) and \
+            v["max_relative"] < v["rms_relative"] * (1 - 1e-12):
+        problems.append("max_relative: below rms_relative (the largest deviation is at least their rms)")
+    for k in ("within_10", "within_20"):
+        if not (is_number(v[k]) and 0 <= v[k] <= 1):
+            problems.append("%s: must be a share in [0, 1]" % k)
+    if is_number(v["within_10"]) and is_number(v["within_20"]) and v["within_10"] > v["within_20"]:
+        problems.append("within_10: more than within_20")
+    if not isinstance(v["weighted"], bool):
+        problems.append("weighted: must be a boolean")
+    rng = v["range"] if isinstance(v["range"], list) else []
+    if sorted(r.get("symbol") for r in rng if isinstance(r, dict)) != sorted(symbols):
+        problems.append("range: must give every group once (%r), not %r" %
+                        (symbols, [r.get("symbol") for r in rng if isinstance(r, dict)]))
+    for i, r in enumerate(rng):
+        w = "range[%d]" % i
+        if keys(r, w, ["symbol", "min", "max"], [], problems):
+            if not (is_number(r["min"]) and is_number(r["max"]) and 0 < r["min"] <= r["max"]):
+                problems.append("%s: must be 0 < min <= max" % w)
+    for i, o in enumerate(v["outliers"] if isinstance(v["outliers"], list) else []):
+        w = "outliers[%d]" % i
+        if keys(o, w, ["row", "line", "studentized"], [], problems):
+            if not (isinstance(o["row"], int) and 1 <= o["row"] <= n):
+                problems.append("%s.row: must be a data row 1..%d" % (w, n))
+            if not (isinstance(o["line"], int) and o["line"] > o["row"]):
+                problems.append("%s.line: must be a file line after the header" % w)
+            if not (is_number(o["studentized"]) and abs(o["studentized"]) > 3):
+                problems.append("%s.studentized: a flagged row has |t| > 3" % w)
 
 
 def check(schema, value):
     problems = []
-    {"groups": check_groups, "dim": check_dim, "scale": check_scale, "convert": check_convert}[schema](value, problems)
+    {"groups": check_groups, "dim": check_dim, "scale": check_scale, "convert": check_convert,
+     "fit": check_fit}[schema](value, problems)
     return problems
 
 

@@ -156,5 +156,86 @@ for name, value in convert_bad.items():
     if not check_schema.check("convert", value):
         print("FAIL: not rejected:", name)
         failures += 1
-print("%d passed, %d failed" % (len(cases) + len(convert_bad) + 5 - failures, failures))
+# scale: the towed pod of tests/cli/problems/scale_pod_uncertain.toml (factor 1.136 +- 0.064)
+scale_good = {
+    "status": "exact", "model": {"U": 17.1176}, "free": [],
+    "groups": [{"label": "Re^-1", "text": "mu/(rho*U*D)", "exponents": {"mu": 1, "rho": -1, "U": -1, "D": -1},
+                "prototype": 1.2e-6, "model": 1.2e-6, "ratio": 1, "matched": True}],
+    "dependent": {"name": "F", "unit": "N", "prototype_over_model": 1.136, "prototype_over_model_uncertainty": 0.064,
+                  "exact": True, "rule": "F_p/F_m = (rho_p/rho_m)", "measured": 120, "measured_uncertainty": 1.5,
+                  "predicted": 136.3, "predicted_uncertainty": 7.9},
+    "notes": [],
+}
+
+
+def broken_scale(edit):
+    v = copy.deepcopy(scale_good)
+    edit(v)
+    return v
+
+
+scale_bad = {
+    "no notes": broken_scale(lambda v: v.pop("notes")),
+    "empty label": broken_scale(lambda v: v["groups"][0].update(label="")),
+    "uncertainty of three digits": broken_scale(lambda v: v["dependent"].update(prototype_over_model_uncertainty=0.0643)),
+    "uncertainty without a value": broken_scale(lambda v: v["dependent"].update(prototype_over_model=None)),
+    "predicted without a measured value": broken_scale(lambda v: v["dependent"].update(
+        measured=None, measured_uncertainty=None)),
+    "negative uncertainty": broken_scale(lambda v: v["dependent"].update(predicted_uncertainty=-7.9)),
+    "exact not a boolean": broken_scale(lambda v: v["dependent"].update(exact="yes")),
+    "free while exact": broken_scale(lambda v: v.update(free=["U"])),
+}
+if check_schema.check("scale", scale_good):
+    print("FAIL: the valid scale object is rejected:", check_schema.check("scale", scale_good))
+    failures += 1
+for name, value in scale_bad.items():
+    if not check_schema.check("scale", value):
+        print("FAIL: not rejected (scale):", name)
+        failures += 1
+
+# fit: Nu = C Re^a Pr^b with Pr held at 1/3 (made-up numbers of the right shape)
+fit_good = {
+    "basis": "named", "n": 10, "dependent": {"exponents": {"h": 1, "D": 1, "k": -1}, "symbol": "Nu"},
+    "coefficient": {"value": 0.2, "std_error": 0.01, "ci95": [0.18, 0.22]},
+    "terms": [{"exponents": {"rho": 1, "U": 1, "D": 1, "mu": -1}, "symbol": "Re", "exponent": 0.6,
+               "std_error": 0.02, "ci95": [0.55, 0.65], "fixed": False},
+              {"exponents": {"mu": 1, "cp": 1, "k": -1}, "symbol": "Pr", "exponent": 1 / 3, "std_error": 0,
+               "ci95": [1 / 3, 1 / 3], "fixed": True}],
+    "constant": [], "r2": 0.99, "rms_relative": 0.03, "max_relative": 0.06,
+    "range": [{"symbol": "Nu", "min": 10, "max": 100}, {"symbol": "Re", "min": 1e3, "max": 3e4},
+              {"symbol": "Pr", "min": 0.7, "max": 7}],
+    "dof": 8, "weighted": False, "within_10": 0.9, "within_20": 1.0,
+    "outliers": [{"row": 3, "line": 4, "studentized": 3.4}],
+}
+
+
+def broken_fit(edit):
+    v = copy.deepcopy(fit_good)
+    edit(v)
+    return v
+
+
+fit_bad = {
+    "interval misses the estimate": broken_fit(lambda v: v["terms"][0].update(ci95=[0.61, 0.65])),
+    "wrong degrees of freedom": broken_fit(lambda v: v.update(dof=7)),
+    "held exponent with an error": broken_fit(lambda v: v["terms"][1].update(std_error=0.1)),
+    "negative coefficient": broken_fit(lambda v: v["coefficient"].update(value=-0.2, ci95=[-0.3, -0.1])),
+    "r2 above 1": broken_fit(lambda v: v.update(r2=1.5)),
+    "largest below the rms": broken_fit(lambda v: v.update(max_relative=0.01)),
+    "shares out of order": broken_fit(lambda v: v.update(within_10=1.0, within_20=0.9)),
+    "range missing a group": broken_fit(lambda v: v["range"].pop()),
+    "range upside down": broken_fit(lambda v: v["range"][1].update(min=3e4, max=1e3)),
+    "outlier not flagged": broken_fit(lambda v: v["outliers"][0].update(studentized=1.2)),
+    "outlier beyond the rows": broken_fit(lambda v: v["outliers"][0].update(row=11, line=12)),
+    "extra key": broken_fit(lambda v: v.update(extra=1)),
+}
+if check_schema.check("fit", fit_good):
+    print("FAIL: the valid fit object is rejected:", check_schema.check("fit", fit_good))
+    failures += 1
+for name, value in fit_bad.items():
+    if not check_schema.check("fit", value):
+        print("FAIL: not rejected (fit):", name)
+        failures += 1
+checked = len(cases) + len(convert_bad) + len(scale_bad) + len(fit_bad) + 7
+print("%d passed, %d failed" % (checked - failures, failures))
 sys.exit(1 if failures else 0)

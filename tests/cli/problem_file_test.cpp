@@ -1,7 +1,7 @@
 // The problem-file loader of the nondim program: the schema of DESIGN.md (variables keep
-// their order; title, dependent, repeating, name, unit, note, value, uncertainty, prototype,
-// model), and every fault named with its key and line. TOML syntax per the TOML 1.0.0
-// specification. Also the reader of values after NAME= on the command line.
+// their order; title, dependent, repeating, configuration, name, unit, note, value,
+// uncertainty, prototype, model, prototype_uncertainty, model_uncertainty), and every fault named with its key and
+// line. TOML syntax per the TOML 1.0.0 specification. Also the reader of values after NAME= on the command line.
 #include <doctest/doctest.h>
 
 #include <string>
@@ -129,10 +129,41 @@ TEST_SUITE("problem file") {
     CHECK_FALSE(f.variables[0].unit_literal);
   }
 
+  TEST_CASE("a configuration is one of the regime table's, named with its line when not") {
+    const auto f =
+        parse_problem_text("configuration = \"sphere\"\n[[variable]]\nname = \"F\"\nunit = \"N\"\n", "p.toml");
+    CHECK(f.configuration == "sphere");
+    CHECK(f.configuration_where.line == 1);
+    CHECK(message_of("title = \"t\"\nconfiguration = \"Pipe flow\"\n[[variable]]\nname = \"F\"\nunit = \"N\"\n") ==
+          "nondim: p.toml:2: 'configuration': 'Pipe flow' is not a configuration of the regime table (accepted: "
+          "pipe_flow, flat_plate, cylinder_crossflow, sphere, vertical_plate, open_channel)");
+    CHECK(message_of("configuration = 3\n[[variable]]\nname = \"F\"\nunit = \"N\"\n").find("p.toml:1:") !=
+          std::string::npos);
+  }
+
+  TEST_CASE("prototype and model uncertainties are read beside their values, and refused without them") {
+    const auto f = parse_problem_text(
+        "[[variable]]\nname = \"U\"\nunit = \"m/s\"\nprototype = 10\nprototype_uncertainty = 0.1\nmodel = 2\n"
+        "model_uncertainty = \"2 %\"\n",
+        "p.toml");
+    REQUIRE(f.variables[0].prototype_uncertainty);
+    CHECK(f.variables[0].prototype_uncertainty->number == 0.1);
+    REQUIRE(f.variables[0].model_uncertainty);
+    CHECK(f.variables[0].model_uncertainty->text == "2 %");
+    CHECK(f.variables[0].model_uncertainty->where.line == 7);
+    CHECK(message_of("[[variable]]\nname = \"U\"\nunit = \"m/s\"\nprototype = 10\nmodel_uncertainty = 0.1\n") ==
+          "nondim: p.toml:5: variable 1 ('U') has a 'model_uncertainty' but no 'model'");
+    CHECK(message_of("[[variable]]\nname = \"U\"\nunit = \"m/s\"\nprototype_uncertainty = 0.1\n") ==
+          "nondim: p.toml:4: variable 1 ('U') has a 'prototype_uncertainty' but no 'prototype'");
+    CHECK(message_of("[[variable]]\nname = \"U\"\nunit = \"m/s\"\nprototype = 1\nprototype_uncertainty = true\n")
+              .find("p.toml:5: 'prototype_uncertainty' of variable 1 must be a number or a string") !=
+          std::string::npos);
+  }
+
   TEST_CASE("unknown keys are named with their line") {
     CHECK(message_of("titel = \"x\"\n[[variable]]\nname = \"F\"\nunit = \"N\"\n") ==
-          "nondim: p.toml:1: unknown key 'titel' (a problem file takes title, dependent, repeating and [[variable]] "
-          "tables)");
+          "nondim: p.toml:1: unknown key 'titel' (a problem file takes title, dependent, repeating, configuration and "
+          "[[variable]] tables)");
     CHECK(
         message_of("[[variable]]\nname = \"F\"\nunits = \"N\"\n").find("p.toml:3: unknown key 'units' in variable 1") !=
         std::string::npos);
@@ -229,7 +260,7 @@ TEST_SUITE("problem file") {
       // a quoted key holding the code point is read, then refused by the schema with its name
       if (message_of("\"k" + ch + "\" = 1\n[[variable]]\nname = \"x\"\nunit = \"m\"\n") ==
           "nondim: p.toml:1: unknown key 'k" + ch +
-              "' (a problem file takes title, dependent, repeating and [[variable]] tables)")
+              "' (a problem file takes title, dependent, repeating, configuration and [[variable]] tables)")
         ++key_errors;
       const auto f = parse_problem_text("title = \"" + ch + "\" # " + ch +
                                             "\n[[variable]]\nname = 'x'\nunit = \"m\"\nnote = \"\"\"" + ch + "\"\"\"\n",

@@ -2,7 +2,7 @@
 """Runs the nondim program once and checks what it did.
 
   run_case.py --program PATH [--cwd DIR] [--status N] [--golden FILE --compare text|json]
-              [--schema groups|dim|scale|convert] [--stderr REGEX ...] [--stdout REGEX ...] -- ARGS...
+              [--schema groups|dim|scale|convert|fit] [--stderr REGEX ...] [--stdout REGEX ...] -- ARGS...
 
 - the exit status must be --status (default 0);
 - with --golden, standard output is compared with the file: exactly (text) or as parsed
@@ -58,7 +58,7 @@ def main():
     ap.add_argument("--status", type=int, default=0)
     ap.add_argument("--golden")
     ap.add_argument("--compare", choices=["text", "json"], default="text")
-    ap.add_argument("--schema", choices=["groups", "dim", "scale", "convert"])
+    ap.add_argument("--schema", choices=["groups", "dim", "scale", "convert", "fit"])
     ap.add_argument("--stderr", action="append", default=[])
     ap.add_argument("--stdout", action="append", default=[])
     ap.add_argument("--json-value", action="append", default=[],

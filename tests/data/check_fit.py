@@ -27,7 +27,7 @@ def close(what, got, want, rel=1e-7):
         failures.append(f"{what}: nondim {got!r}, statsmodels {want!r}")
 
 
-def run_fit(directory, rows, uncertainty=None, extra=()):
+def run_fit(directory, rows, uncertainty=None, extra=(), row_uncertainty=None):
     problem = os.path.join(directory, "p.toml")
     with open(problem, "w") as f:
         f.write('dependent = "Nu"\n')
@@ -37,9 +37,14 @@ def run_fit(directory, rows, uncertainty=None, extra=()):
                 f.write(f'value = 1\nuncertainty = {uncertainty}\n')
     data = os.path.join(directory, "d.csv")
     with open(data, "w") as f:
-        f.write("Nu,Re,Pr\n")
-        for nu, re, pr in rows:
-            f.write(f"{nu!r},{re!r},{pr!r}\n")
+        if row_uncertainty is None:
+            f.write("Nu,Re,Pr\n")
+            for nu, re, pr in rows:
+                f.write(f"{nu!r},{re!r},{pr!r}\n")
+        else:  # a column u(Nu): each row's standard uncertainty of Nu (GUM notation)
+            f.write("Nu,Re,Pr,u(Nu) [1]\n")
+            for (nu, re, pr), u in zip(rows, row_uncertainty):
+                f.write(f"{nu!r},{re!r},{pr!r},{u!r}\n")
     out = subprocess.run([program, "fit", "--file", problem, data, "--basis", "classical", "--format", "json", *extra],
                          capture_output=True, text=True, check=True)
     return json.loads(out.stdout)
@@ -101,6 +106,14 @@ with tempfile.TemporaryDirectory() as d:
         failures.append("the fit with an uncertainty on Nu is not weighted")
     X = sm.add_constant(np.column_stack([np.log(re), np.log(pr)]))
     compare("WLS", got, sm.WLS(np.log(nu), X, weights=(nu / 2.0) ** 2), X)
+    # weighted row by row: a column u(Nu) of 1 % to 8 % of each Nu gives u(ln Nu) = u/Nu per row;
+    # the file's uncertainty of Nu (2) gives way to the column
+    share = rng.uniform(0.01, 0.08, n)
+    nu_rows = 0.023 * re**0.8 * pr**0.4 * np.exp(rng.normal(0, share))
+    got = run_fit(d, zip(nu_rows, re, pr), uncertainty=2, row_uncertainty=share * nu_rows)
+    if not got["weighted"]:
+        failures.append("the fit with a column u(Nu) is not weighted")
+    compare("WLS by rows", got, sm.WLS(np.log(nu_rows), X, weights=1.0 / share**2), X)
     # a held exponent: ln Nu - ln Pr / 3 fitted on ln Re (statsmodels with the offset moved over)
     got = run_fit(d, zip(nu, re, pr), extra=("--fix", "Pi3=1/3"))
     res = sm.OLS(np.log(nu) - np.log(pr) / 3, sm.add_constant(np.log(re))).fit()

@@ -123,7 +123,7 @@ void run_demo(std::ostream& out) {
          "power. The columns U [m/s], D (mm), h [W/(m^2*K)] are read from CSV; the air's properties\n"
          "are constants of the problem file.\n\n"
          "$ nondim fit --demo        (the same as: nondim fit --file cylinder_rig.toml cylinder_rig.csv)\n\n";
-  run_fit(out, "", "", true, "named", {}, "text", "");
+  run_fit(out, "", "", true, "named", {}, "text", "", "");
   out << "\nWhat it means\n"
          "  - Pr is the same in every run (air at one temperature): it is reported, not fitted. Its\n"
          "    exponent cannot come from this rig; hold it at the accepted 1/3 (--fix Pr=1/3) only\n"

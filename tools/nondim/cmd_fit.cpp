@@ -25,14 +25,17 @@ struct fit_args {
   std::vector<std::string> fixes;
   std::string format = "text";
   std::string plot;
+  std::string configuration;
   bool demo = false;
 };
 }  // namespace
 
 void run_fit(std::ostream& out, const std::string& file, const std::string& data, bool demo, const std::string& basis,
-             const std::vector<std::string>& fixes, const std::string& format, const std::string& plot) {
+             const std::vector<std::string>& fixes, const std::string& format, const std::string& plot,
+             const std::string& configuration) {
   problem_input in =
       demo ? problem_from_loaded(parse_problem_text(demo_rig_problem, "cylinder_rig.toml")) : problem_from_file(file);
+  if (!configuration.empty()) override_configuration(in, configuration);
   in.options.form = basis == "classical" ? basis::classical : basis::named;
   const csv_numbers table = demo ? parse_csv_numbers(demo_rig_data, "cylinder_rig.csv") : load_csv_numbers(data);
   const fit_report r = fit_from_table(in, table, fixes);
@@ -65,6 +68,7 @@ subcommand add_fit(CLI::App& app) {
   sub->add_option("--plot", args->plot,
                   "Draw the data collapse into FILE.svg, .pdf or .png with gnuplot; the data (.dat) and the script "
                   "(.gp) are written beside it");
+  sub->add_option("--configuration", args->configuration, configuration_help());
   sub->add_flag("--demo", args->demo, "Fit the built-in heated-cylinder rig instead of files");
   sub->footer(
       "Examples:\n"
@@ -77,7 +81,8 @@ subcommand add_fit(CLI::App& app) {
             if (!args->demo && (args->file.empty() || args->data.empty()))
               throw input_error(
                   with_prefix("fit needs --file PROBLEM.toml and DATA.csv (or --demo); see nondim fit --help"));
-            run_fit(out, args->file, args->data, args->demo, args->basis, args->fixes, args->format, args->plot);
+            run_fit(out, args->file, args->data, args->demo, args->basis, args->fixes, args->format, args->plot,
+                    args->configuration);
           }};
 }
 

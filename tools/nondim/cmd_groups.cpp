@@ -26,6 +26,7 @@ struct groups_args {
   std::string repeating;
   std::string dependent;
   std::string basis;
+  std::string configuration;
   std::string format = "text";
   bool scales = false;
   bool alternatives = false;
@@ -51,6 +52,7 @@ subcommand add_groups(CLI::App& app) {
                   "Prandtl...) where possible")
       ->check(CLI::IsMember({"classical", "named"}))
       ->default_str("classical");
+  sub->add_option("--configuration", args->configuration, configuration_help());
   sub->add_option("--format", args->format, "Output format")
       ->check(CLI::IsMember({"text", "markdown", "latex", "json"}))
       ->default_str("text");
@@ -83,6 +85,7 @@ subcommand add_groups(CLI::App& app) {
         problem_input in = args->file.empty() ? problem_from_arguments(args->variables) : problem_from_file(args->file);
         if (!args->dependent.empty()) override_dependent(in, args->dependent);
         if (!args->repeating.empty()) override_repeating(in, args->repeating);
+        if (!args->configuration.empty()) override_configuration(in, args->configuration);
         if (!args->basis.empty()) in.options.form = args->basis == "named" ? basis::named : basis::classical;
         const analysis a = analyze_input(in);
         if (args->alternatives) {

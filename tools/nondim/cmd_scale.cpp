@@ -10,12 +10,14 @@
 #include <vector>
 
 #include <CLI/CLI.hpp>
+#include <nondim/analysis/data/rounding.hpp>
 #include <nondim/similarity.hpp>
 
 #include "commands.hpp"
 #include "json_util.hpp"
 #include "messages.hpp"
 #include "problem_input.hpp"
+#include "scale_notes.hpp"
 #include "units_text.hpp"
 
 namespace nondim::tool {
@@ -28,6 +30,7 @@ struct scale_args {
   std::string priority;
   std::string repeating;
   std::string dependent;
+  std::string configuration;
 };
 
 /// "1,3" -> {0, 2}: group numbers as the text report shows them.
@@ -50,17 +53,41 @@ std::vector<std::size_t> group_numbers(const std::string& list, std::size_t coun
   return out;
 }
 
+/// A value rounded to what the computation supports (12 significant digits: a product of
+/// inexact doubles does not print as 3999.999999999998), or null.
 nlohmann::ordered_json optional_number(const std::optional<double>& x) {
-  if (x) return *x;
+  if (x) return round_for_report(*x).value;
   return nullptr;
 }
 
-nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a) {
+/// A value with its standard uncertainty, rounded together (GUM 7.2.6), into `j[key]` and
+/// `j[key + "_uncertainty"]` (the latter only when there is one).
+void put_measured(nlohmann::ordered_json& j, const std::string& key, const std::optional<double>& x,
+                  const std::optional<double>& u) {
+  if (!x) {
+    j[key] = nullptr;
+    return;
+  }
+  const rounded_value r = round_for_report(*x, u);
+  j[key] = r.value;
+  if (r.uncertainty) j[key + "_uncertainty"] = *r.uncertainty;
+}
+
+/// "Re^-1" for a group the catalog names without doubt, "" otherwise: a name only where
+/// the evidence supports it (an ambiguous match is left as the product).
+std::string group_label(const pi_group& g) {
+  for (const auto& m : g.matches)
+    if (!m.ambiguous) return std::string(m.symbol) + detail::exponent_suffix(m.power, text_form::ascii);
+  return {};
+}
+
+nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a,
+                                 const std::vector<std::string>& notes) {
   nlohmann::ordered_json j;
   j["status"] = std::string(to_string(plan.status));
   nlohmann::ordered_json model = nlohmann::ordered_json::object();
   for (const auto& v : plan.variables)
-    if (v.source == model_source::found && v.model) model[v.name] = *v.model;
+    if (v.source == model_source::found && v.model) model[v.name] = round_for_report(*v.model).value;
   j["model"] = model;
   j["free"] = plan.free;
   nlohmann::ordered_json groups = nlohmann::ordered_json::array();
@@ -77,15 +104,27 @@ nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a)
     put(head);
     for (std::size_t i = 0; i < g.exponents.size(); ++i)
       if (i != head) put(i);
-    groups.push_back({{"exponents", e},
+    groups.push_back({{"label", g.label.empty() ? nlohmann::ordered_json(nullptr) : nlohmann::ordered_json(g.label)},
+                      {"text", g.text},
+                      {"exponents", e},
                       {"prototype", optional_number(g.prototype)},
                       {"model", optional_number(g.model)},
                       {"ratio", optional_number(g.ratio)},
                       {"matched", g.matched}});
   }
   j["groups"] = groups;
-  j["dependent"] = {{"name", plan.dependent.name},
-                    {"prototype_over_model", optional_number(plan.dependent.prototype_over_model)}};
+  const dependent_plan& dp = plan.dependent;
+  const variable_plan& dv = plan.variables[dp.index];
+  nlohmann::ordered_json d;
+  d["name"] = dp.name;
+  d["unit"] = dv.unit;
+  put_measured(d, "prototype_over_model", dp.prototype_over_model, dp.prototype_over_model_uncertainty);
+  d["exact"] = dp.exact;
+  d["rule"] = dp.rule.empty() ? nlohmann::ordered_json(nullptr) : nlohmann::ordered_json(dp.rule);
+  put_measured(d, "measured", dv.model, dv.model_uncertainty);
+  put_measured(d, "predicted", dv.prototype, dv.prototype_uncertainty);
+  j["dependent"] = d;
+  j["notes"] = notes;
   return j;
 }
 
@@ -93,6 +132,7 @@ void run_scale(const scale_args& args, std::ostream& out) {
   problem_input in = problem_from_file(args.file);
   if (!args.dependent.empty()) override_dependent(in, args.dependent);
   if (!args.repeating.empty()) override_repeating(in, args.repeating);
+  if (!args.configuration.empty()) override_configuration(in, args.configuration);
   const analysis a = analyze_input(in);
   const problem_file& f = *in.file;
 
@@ -100,14 +140,13 @@ void run_scale(const scale_args& args, std::ostream& out) {
   for (std::size_t j = 0; j < a.variables.size(); ++j) {
     const variable& v = a.variables[j];
     const file_variable& fv = f.variables[j];
-    sp.add(similarity_variable{v.name, v.unit, v.factor, v.offset, fv.prototype, fv.model, v.dim});
+    similarity_variable sv{v.name, v.unit, v.factor, v.offset, fv.prototype, fv.model, v.dim};
+    sv.prototype_uncertainty = scale_uncertainty(f, fv.prototype_uncertainty, v, fv.prototype, "prototype_uncertainty");
+    sv.model_uncertainty = scale_uncertainty(f, fv.model_uncertainty, v, fv.model, "model_uncertainty");
+    sp.add(std::move(sv));
   }
   // A group the catalog names is labelled so ("Fr^-2", "Re^-1"), as `nondim groups` names it.
-  for (const auto& g : a.groups)
-    sp.add_group(g.exponents, g.matches.empty()
-                                  ? std::string{}
-                                  : std::string(g.matches.front().symbol) +
-                                        detail::exponent_suffix(g.matches.front().power, text_form::ascii));
+  for (const auto& g : a.groups) sp.add_group(g.exponents, group_label(g));
   sp.dependent = a.dependent;
   if (!args.priority.empty()) sp.priority = group_numbers(args.priority, a.groups.size());
 
@@ -119,8 +158,12 @@ void run_scale(const scale_args& args, std::ostream& out) {
     throw input_error(with_prefix((fv != nullptr ? f.at(fv->where) : f.path + ": ") + std::string(bare_message(e))));
   }
 
+  // the regimes and the compressibility the groups alone do not show, after the plan's own notes
+  for (auto& n : regime_change_notes(plan, a)) plan.notes.push_back(std::move(n));
+  for (auto& n : compressibility_notes(plan, a)) plan.notes.push_back(std::move(n));
+
   if (args.format == "json") {
-    out << plan_json(plan, a).dump(2) << '\n';
+    out << plan_json(plan, a, plan.notes).dump(2) << '\n';
     return;
   }
   if (!f.title.empty()) out << f.title << "\n\n";
@@ -143,10 +186,13 @@ subcommand add_scale(CLI::App& app) {
                   "Groups that must match exactly, by number (1,3); the others match as well as they can");
   sub->add_option("-r,--repeating", args->repeating, "The repeating variables (overrides the file)");
   sub->add_option("-d,--dependent", args->dependent, "The dependent variable (overrides the file)");
+  sub->add_option("--configuration", args->configuration, configuration_help());
   sub->footer(
       "A variable with `prototype` and `model` is fixed on the model (the fluid, gravity, the scale);\n"
       "one with `prototype` only is found. The dependent variable needs no prototype value: the plan\n"
-      "says how to carry the value measured on the model to full scale.\n"
+      "says how to carry the value measured on the model to full scale. `prototype_uncertainty` and\n"
+      "`model_uncertainty` (standard uncertainties: 0.5, \"0.5 K\" or \"2 %\") give the scale-up factor\n"
+      "and the predicted value their standard uncertainties (GUM, uncorrelated inputs).\n"
       "Example: nondim scale towed_pod.toml --format json");
   return {sub, [args](std::ostream& out) { run_scale(*args, out); }};
 }

@@ -30,6 +30,7 @@ subcommand add_fit(CLI::App& app);
 /// \brief Runs `nondim fit` (also for the demo): `demo` takes the built-in rig instead of files.
 /// \throws input_error for bad input.
 void run_fit(std::ostream& out, const std::string& file, const std::string& data, bool demo, const std::string& basis,
-             const std::vector<std::string>& fixes, const std::string& format, const std::string& plot);
+             const std::vector<std::string>& fixes, const std::string& format, const std::string& plot,
+             const std::string& configuration);
 
 }  // namespace nondim::tool

@@ -36,6 +36,21 @@ std::pair<std::string, std::string> split_header(std::string_view cell) {
   return {s, {}};
 }
 
+/// "u(U) [ft/s]" -> {"U", "ft/s"}; "u(D)" -> {"D", ""}: a column of standard uncertainties in
+/// the GUM's notation; empty for any other header.
+std::optional<std::pair<std::string, std::string>> split_uncertainty_header(std::string_view cell) {
+  const std::string s = trimmed(cell);
+  if (s.size() < 4 || s[0] != 'u' || s[1] != '(') return std::nullopt;
+  const auto close = s.find(')');
+  if (close == std::string::npos) return std::nullopt;
+  const std::string name = trimmed(std::string_view(s).substr(2, close - 2));
+  const std::string rest = trimmed(std::string_view(s).substr(close + 1));
+  if (rest.empty()) return std::pair{name, std::string()};
+  const auto [empty, unit] = split_header("x " + rest);
+  if (empty != "x" || unit.empty()) return std::nullopt;
+  return std::pair{name, unit};
+}
+
 std::string printed(double x, int digits = 4) {
   if (!std::isfinite(x)) return "-";  // never a NaN in a report
   char buffer[48];
@@ -101,17 +116,21 @@ fit_report fit_from_table(problem_input& in, const csv_numbers& table, const std
   std::vector<std::optional<std::size_t>> column_of(nv);
   std::vector<double> column_factor(table.header.size(), 1.0);
   std::vector<double> column_offset(table.header.size(), 0.0);
+  std::vector<std::optional<std::size_t>> uncertainty_column_of(nv);  // a column u(NAME)
   for (std::size_t c = 0; c < table.header.size(); ++c) {
-    const auto [name, unit] = split_header(table.header[c]);
+    const auto uncertainty = split_uncertainty_header(table.header[c]);
+    const auto [name, unit] = uncertainty ? *uncertainty : split_header(table.header[c]);
     const std::string where = table.path + ": header, column " + std::to_string(c + 1) + " '" + table.header[c] + "': ";
     const auto v = a.index_of(name);
     if (!v)
       throw input_error(with_prefix(where + "'" + name + "' is not a variable of the problem (its variables: " +
                                     detail::comma_list(a.names()) + ")"));
-    if (column_of[*v])
-      throw input_error(with_prefix(where + "the variable '" + name + "' has a column already (column " +
-                                    std::to_string(*column_of[*v] + 1) + ")"));
-    column_of[*v] = c;
+    auto& slot = uncertainty ? uncertainty_column_of[*v] : column_of[*v];
+    if (slot)
+      throw input_error(with_prefix(where + "the variable '" + name + "' has " +
+                                    (uncertainty ? "an uncertainty column" : "a column") + " already (column " +
+                                    std::to_string(*slot + 1) + ")"));
+    slot = c;
     const variable& var = a.variables[*v];
     column_factor[c] = var.factor;
     column_offset[c] = var.offset;
@@ -129,6 +148,7 @@ fit_report fit_from_table(problem_input& in, const csv_numbers& table, const std
       column_factor[c] = u.factor;
       column_offset[c] = u.offset;
     }
+    if (uncertainty) column_offset[c] = 0.0;  // a width: a scale's zero does not move it (0.5 degC is 0.5 K)
   }
 
   // ln of every variable, per row or constant
@@ -213,12 +233,28 @@ fit_report fit_from_table(problem_input& in, const csv_numbers& table, const std
   std::vector<double> relative_u;
   {
     // weights: the relative standard uncertainty of the dependent group from its variables'
-    // uncertainties in the problem file (GUM eq. 12, uncorrelated inputs)
+    // uncertainties, per row from a column u(NAME) or else from the problem file (GUM eq. 12,
+    // uncorrelated inputs)
     const pi_group& dep = a.groups[0];
     bool any = false;
     std::vector<double> sum(n, 0.0);
     for (std::size_t v = 0; v < nv; ++v) {
       if (dep.exponents[v] == 0) continue;
+      if (const auto uc = uncertainty_column_of[v]) {
+        any = true;
+        const auto e = static_cast<double>(dep.exponents[v]);
+        const measured_value* m = in.report.point.find(a.variables[v].name);
+        for (std::size_t row = 0; row < n; ++row) {
+          const double u = column_factor[*uc] * table.columns[*uc][row];
+          if (!(u >= 0.0) || !std::isfinite(u))
+            throw input_error(with_prefix(table.at(row, *uc) + "the standard uncertainty " +
+                                          printed(table.columns[*uc][row], 6) + " is not >= 0"));
+          const double x = column_of[v] ? std::exp(ln_column[v][row]) : m->value;
+          const double rel = u / x;
+          sum[row] += e * e * rel * rel;
+        }
+        continue;
+      }
       const measured_value* m = in.report.point.find(a.variables[v].name);
       if (m == nullptr || !m->uncertainty || *m->uncertainty == 0.0) continue;
       any = true;
@@ -249,8 +285,8 @@ fit_report fit_from_table(problem_input& in, const csv_numbers& table, const std
   // regimes at the ends of the data's range
   for (std::size_t g = 0; g < a.groups.size(); ++g) {
     const fit_range& range = r.result.ranges[g];
-    const auto low = regime_notes(a.groups[g].matches, range.min);
-    const auto high = regime_notes(a.groups[g].matches, range.max);
+    const auto low = regime_notes(a.groups[g].matches, range.min, a.configuration);
+    const auto high = regime_notes(a.groups[g].matches, range.max, a.configuration);
     for (std::size_t i = 0; i < low.size() && i < high.size(); ++i) {
       if (low[i].regime == high[i].regime)
         r.regime_notes.push_back(r.symbols[g] + " " + printed(low[i].number) + " .. " + printed(high[i].number) + ": " +

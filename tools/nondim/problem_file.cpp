@@ -16,6 +16,7 @@
 #include <toml++/toml.h>
 
 #include <nondim/analysis/names/quantity_kind.hpp>
+#include <nondim/analysis/names/regimes.hpp>
 #include <nondim/solver/parse/detail/text.hpp>
 
 #include "messages.hpp"
@@ -270,7 +271,7 @@ void read_variable(const checker& c, const toml::table& t, std::size_t index, pr
       v.prototype = c.number_value(node, "'prototype' of " + label);
     } else if (k == "model") {
       v.model = c.number_value(node, "'model' of " + label);
-    } else if (k == "value" || k == "uncertainty") {
+    } else if (k == "value" || k == "uncertainty" || k == "prototype_uncertainty" || k == "model_uncertainty") {
       file_quantity q;
       q.where = position_of(node.source());
       if (node.is_string())
@@ -281,16 +282,26 @@ void read_variable(const checker& c, const toml::table& t, std::size_t index, pr
         c.fail(node.source(), "'" + k + "' of " + label + " must be a number or a string (" +
                                   (k == "value" ? "998 or \"998 kg/m^3\"" : "0.5, \"0.5 K\" or \"2 %\"") + "), not " +
                                   std::string(type_name(node)));
-      (k == "value" ? v.value : v.uncertainty) = std::move(q);
+      (k == "value"                   ? v.value
+       : k == "uncertainty"           ? v.uncertainty
+       : k == "prototype_uncertainty" ? v.prototype_uncertainty
+                                      : v.model_uncertainty) = std::move(q);
     } else {
       c.fail(key.source(),
              "unknown key '" + std::string(k) + "' in " + label +
-                 " (a [[variable]] table takes name, unit, note, kind, value, uncertainty, prototype, model)");
+                 " (a [[variable]] table takes name, unit, note, kind, value, uncertainty, prototype, model, "
+                 "prototype_uncertainty, model_uncertainty)");
     }
   }
   if (!has_name) c.fail(t.source(), label + " has no 'name'");
   if (!has_unit) c.fail(t.source(), label + " ('" + v.name + "') has no 'unit' (write unit = \"1\" for a pure number)");
   if (v.uncertainty && !v.value) c.fail(t.source(), label + " ('" + v.name + "') has an 'uncertainty' but no 'value'");
+  if (v.prototype_uncertainty && !v.prototype)
+    throw input_error(with_prefix(out.at(v.prototype_uncertainty->where) + label + " ('" + v.name +
+                                  "') has a 'prototype_uncertainty' but no 'prototype'"));
+  if (v.model_uncertainty && !v.model)
+    throw input_error(with_prefix(out.at(v.model_uncertainty->where) + label + " ('" + v.name +
+                                  "') has a 'model_uncertainty' but no 'model'"));
   if (const file_variable* before = out.find(v.name))
     c.fail(t.source(), label + ": the name '" + v.name + "' is already used by the variable at line " +
                            std::to_string(before->where.line));
@@ -428,14 +439,22 @@ problem_file parse_problem_text(std::string_view text, const std::string& path) 
         c.fail(node.source(), "'repeating' must be an array of names, not " + std::string(type_name(node)));
       out.repeating_where = position_of(node.source());
       for (const toml::node& e : *a) out.repeating.push_back(c.string_value(e, "each name in 'repeating'"));
+    } else if (k == "configuration") {
+      out.configuration = c.string_value(node, "'configuration'");
+      out.configuration_where = position_of(node.source());
+      if (!is_regime_configuration(out.configuration))
+        c.fail(node.source(),
+               "'configuration': '" + out.configuration +
+                   "' is not a configuration of the regime table (accepted: " + regime_configuration_list() + ")");
     } else if (k == "variable") {
       variables = node.as_array();
       if (variables == nullptr)
         c.fail(node.source(),
                "'variable' must be an array of tables ([[variable]]), not " + std::string(type_name(node)));
     } else {
-      c.fail(key.source(), "unknown key '" + std::string(k) +
-                               "' (a problem file takes title, dependent, repeating and [[variable]] tables)");
+      c.fail(key.source(),
+             "unknown key '" + std::string(k) +
+                 "' (a problem file takes title, dependent, repeating, configuration and [[variable]] tables)");
     }
   }
   if (variables == nullptr || variables->empty())

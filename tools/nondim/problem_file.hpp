@@ -33,14 +33,16 @@ struct file_variable {
   std::string name;
   std::string unit;
   std::string note;
-  std::string kind;                          ///< declared kind ("mean_free_path"), empty when absent
-  file_position kind_where;                  ///< the kind's value
-  std::optional<double> prototype;           ///< in the variable's own unit
-  std::optional<double> model;               ///< in the variable's own unit; absent = to be found
-  std::optional<file_quantity> value;        ///< the design point
-  std::optional<file_quantity> uncertainty;  ///< standard uncertainty of `value`
-  file_position where;                       ///< the table
-  file_position unit_where;                  ///< the first character of the unit text inside its quotes
+  std::string kind;                                    ///< declared kind ("mean_free_path"), empty when absent
+  file_position kind_where;                            ///< the kind's value
+  std::optional<double> prototype;                     ///< in the variable's own unit
+  std::optional<double> model;                         ///< in the variable's own unit; absent = to be found
+  std::optional<file_quantity> value;                  ///< the design point
+  std::optional<file_quantity> uncertainty;            ///< standard uncertainty of `value`
+  std::optional<file_quantity> prototype_uncertainty;  ///< standard uncertainty of `prototype` (scale)
+  std::optional<file_quantity> model_uncertainty;      ///< standard uncertainty of `model` (scale)
+  file_position where;                                 ///< the table
+  file_position unit_where;                            ///< the first character of the unit text inside its quotes
   bool unit_literal = true;    ///< the unit text maps 1:1 onto the file (no escapes), so columns carry over
   std::string unit_line_text;  ///< the whole line of the file that holds the unit
 };
@@ -53,6 +55,8 @@ struct problem_file {
   file_position dependent_where;
   std::vector<std::string> repeating;  ///< empty when absent
   file_position repeating_where;
+  std::string configuration;  ///< the regime table's configuration ("pipe_flow"), empty when absent
+  file_position configuration_where;
   std::vector<file_variable> variables;
 
   /// \brief The variable called `name`, or nullptr.

@@ -7,6 +7,7 @@
 #include <utility>
 
 #include <nondim/analysis/names/quantity_kind.hpp>
+#include <nondim/analysis/names/regimes.hpp>
 #include <nondim/data.hpp>
 #include <nondim/parse.hpp>
 
@@ -252,7 +253,47 @@ problem_input problem_from_loaded(problem_file loaded) {
   in.dependent_source = f.at(f.dependent_where) + "'dependent'";
   in.options.repeating = f.repeating;
   in.repeating_source = f.at(f.repeating_where) + "'repeating'";
+  in.options.configuration = f.configuration;
   return in;
+}
+
+std::string configuration_help() {
+  return "The flow configuration whose regime thresholds the notes use (overrides the file's configuration): " +
+         regime_configuration_list() + "; default: the usual ones for each number";
+}
+
+void override_configuration(problem_input& in, const std::string& key) {
+  const std::string k = trim(key);
+  if (!is_regime_configuration(k))
+    throw input_error(with_prefix("--configuration '" + k + "' is not a configuration of the regime table (accepted: " +
+                                  regime_configuration_list() + ")"));
+  in.options.configuration = k;
+}
+
+std::optional<double> scale_uncertainty(const problem_file& f, const std::optional<file_quantity>& q,
+                                        const variable& var, const std::optional<double>& x, const std::string& key) {
+  if (!q || !x) return std::nullopt;
+  const std::string where = f.at(q->where) + "'" + key + "' of variable '" + var.name + "': ";
+  std::string_view text = q->text;
+  while (!text.empty() && (text.back() == ' ' || text.back() == '\t')) text.remove_suffix(1);
+  double u = 0.0;
+  if (!q->number && !text.empty() && text.back() == '%') {
+    try {
+      const auto [percent, rest] = leading_number(text.substr(0, text.size() - 1), "the per cent");
+      if (rest.find_first_not_of(" \t") != std::string_view::npos)
+        throw value_text_error("'" + q->text + "' is not a per cent (write \"2 %\")");
+      u = std::abs(*x) * percent / 100.0;
+    } catch (const value_text_error& e) {
+      throw input_error(with_prefix(where + e.what()));
+    }
+  } else {
+    const number_in_unit n = file_number(f, *q, var, "uncertainty");
+    u = n.number * n.factor / var.factor;  // a width: in the variable's unit, no offset
+  }
+  if (!(std::isfinite(u) && u >= 0.0))
+    throw input_error(with_prefix(where + "a standard uncertainty is a finite number >= 0, not " +
+                                  (q->number ? round_for_report(*q->number).value_text : q->text)));
+  return u;
 }
 
 void override_dependent(problem_input& in, const std::string& name) {

@@ -43,6 +43,20 @@ void override_dependent(problem_input& in, const std::string& name);
 /// \throws input_error for an empty name in the list.
 void override_repeating(problem_input& in, const std::string& list);
 
+/// \brief The help text of `--configuration`, with the accepted keys.
+std::string configuration_help();
+
+/// \brief `--configuration KEY` given on the command line (overrides the file).
+/// \throws input_error when KEY is not one of `regime_configurations`.
+void override_configuration(problem_input& in, const std::string& key);
+
+/// \brief The standard uncertainty, in the variable's own unit, that a `prototype_uncertainty`
+/// or `model_uncertainty` key (`key`) gives for the value `x` (in that unit): a number in the
+/// unit, a string with a unit ("0.5 K") or a per cent of `x` ("2 %"); empty without one.
+/// \throws input_error naming the file, line and key for a bad text or a negative value.
+std::optional<double> scale_uncertainty(const problem_file& f, const std::optional<file_quantity>& q,
+                                        const variable& var, const std::optional<double>& x, const std::string& key);
+
 /// \brief `analyze()` of the input.
 /// \throws input_error for every `analysis_error`, saying where the name came from.
 nondim::analysis analyze_input(const problem_input& in);

@@ -73,6 +73,7 @@ inline analysis classical_analysis(const problem& p, const options& o) {
   a.matrix = p.matrix();
   a.dependent = names[dependent];
   a.repeating_given = !given.empty();
+  a.configuration = o.configuration;
   a.multiprecision = x.multiprecision;
   a.form = basis::classical;
   for (std::size_t r : x.repeating) a.repeating.push_back(names[r]);

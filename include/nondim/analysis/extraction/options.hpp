@@ -27,6 +27,9 @@ struct options {
   std::string dependent;               ///< empty: the first variable
   basis form = basis::classical;       ///< named: re-expressed in catalog groups where possible
   exact_arithmetic arithmetic = exact_arithmetic::automatic;
+  /// The flow configuration whose regime thresholds reports note (a key of
+  /// `regime_configurations`: "pipe_flow"); empty: the usual ones for each number.
+  std::string configuration;
 };
 
 }  // namespace nondim

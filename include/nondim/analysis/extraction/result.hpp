@@ -61,6 +61,7 @@ struct analysis {
   basis form = basis::classical;   ///< the basis the groups are in
   bool multiprecision = false;     ///< the int64 elimination overflowed (or was bypassed): cpp_rational gave the result
   std::vector<std::string> notes;  ///< remarks worth showing the user (ASCII sentences)
+  std::string configuration;       ///< from the options: the configuration regime notes keep to
 
   /// \brief The variable names, in order.
   [[nodiscard]] std::vector<std::string> names() const {

@@ -10,9 +10,12 @@
 #include <cmath>
 #include <cstddef>
 #include <limits>
+#include <string>
 #include <string_view>
 #include <vector>
 
+#include "../../solver/core/detail/cat.hpp"
+#include "../extraction/error.hpp"
 #include "recognize.hpp"
 
 namespace nondim {
@@ -28,10 +31,53 @@ inline constexpr std::size_t regime_max_bands = 5;
 /// The `upper` of the last band of a rule.
 inline constexpr double regime_unbounded = std::numeric_limits<double>::infinity();
 
+/// \brief A flow configuration that regime thresholds belong to, by the key a problem names
+/// it with (`configuration = "pipe_flow"`).
+struct regime_configuration {
+  std::string_view key;          ///< "pipe_flow"
+  std::string_view description;  ///< "flow in a circular pipe"
+};
+
+/// \brief The configurations a problem may name, in the order messages list them.
+inline constexpr std::array regime_configurations{
+    regime_configuration{"pipe_flow", "flow in a circular pipe"},
+    regime_configuration{"flat_plate", "boundary layer on a flat plate"},
+    regime_configuration{"cylinder_crossflow", "circular cylinder in crossflow"},
+    regime_configuration{"sphere", "flow past a sphere"},
+    regime_configuration{"vertical_plate", "natural convection on a vertical plate"},
+    regime_configuration{"open_channel", "open-channel flow"},
+};
+
+/// \brief Whether `key` is one of `regime_configurations`.
+[[nodiscard]] constexpr bool is_regime_configuration(std::string_view key) noexcept {
+  for (const auto& c : regime_configurations)
+    if (c.key == key) return true;
+  return false;
+}
+
+/// \brief "pipe_flow, flat_plate, ...": the accepted keys, for messages.
+[[nodiscard]] inline std::string regime_configuration_list() {
+  std::string s;
+  for (const auto& c : regime_configurations) {
+    if (!s.empty()) s += ", ";
+    s += c.key;
+  }
+  return s;
+}
+
+/// \brief When a rule is noted.
+enum class regime_scope {
+  any,       ///< holds in every configuration (a gas's compressibility, a solid's Biot number)
+  default_,  ///< noted when no configuration is chosen, or when its own is
+  chosen     ///< noted only when its configuration is chosen (too many to list for every Re)
+};
+
 /// \brief The regimes of one named number in one configuration, bands in ascending order
 /// (the last reaches infinity).
 struct regime_rule {
-  std::string_view symbol;         ///< catalog symbol: "Re"
+  std::string_view symbol;  ///< catalog symbol: "Re"
+  std::string_view key;     ///< a `regime_configurations` key; empty for `regime_scope::any`
+  regime_scope scope = regime_scope::default_;
   std::string_view configuration;  ///< "flow in a circular pipe, Re on the inner diameter"
   std::array<regime_band, regime_max_bands> bands{};
   std::size_t band_count = 0;
@@ -42,17 +88,43 @@ struct regime_rule {
 inline constexpr std::array regime_table{
     regime_rule{
         "Re",
+        "pipe_flow",
+        regime_scope::default_,
         "flow in a circular pipe, Re on the mean velocity and the inner diameter",
         {regime_band{2300, "laminar"}, regime_band{4000, "transitional"}, regime_band{regime_unbounded, "turbulent"}},
         3,
         "Cengel & Cimbala, Fluid Mechanics: Fundamentals and Applications, section 8-2 (from memory)"},
     regime_rule{
         "Re",
+        "flat_plate",
+        regime_scope::default_,
         "boundary layer on a flat plate, Re on the distance from the leading edge",
         {regime_band{5e5, "laminar"}, regime_band{regime_unbounded, "turbulent (past the critical Reynolds number)"}},
         2,
         "Incropera et al., Fundamentals of Heat and Mass Transfer, section 6.3 (Re_x,c = 5e5, from memory)"},
+    regime_rule{
+        "Re",
+        "cylinder_crossflow",
+        regime_scope::chosen,
+        "circular cylinder in crossflow, Re on the free-stream velocity and the diameter",
+        {regime_band{5, "attached (creeping) flow"}, regime_band{40, "steady separated flow: a fixed vortex pair"},
+         regime_band{2e5, "vortex shedding with a laminar boundary layer (subcritical)"},
+         regime_band{regime_unbounded, "boundary-layer transition and the drag crisis (critical and beyond)"}},
+        4,
+        "Incropera et al., Fundamentals of Heat and Mass Transfer, section 7.4 (transition near Re_D = 2e5); "
+        "White, Fluid Mechanics, section 7.6 (from memory)"},
+    regime_rule{"Re",
+                "sphere",
+                regime_scope::chosen,
+                "flow past a sphere, Re on the free-stream velocity and the diameter",
+                {regime_band{1, "creeping (Stokes) flow: drag coefficient 24/Re"}, regime_band{1e3, "intermediate"},
+                 regime_band{2e5, "Newton's regime: drag coefficient nearly constant, about 0.4-0.5"},
+                 regime_band{regime_unbounded, "boundary-layer transition and the drag crisis (critical and beyond)"}},
+                4,
+                "White, Fluid Mechanics, section 7.6 (drag of a sphere, from memory)"},
     regime_rule{"Ma",
+                "",
+                regime_scope::any,
                 "gas flow",
                 {regime_band{0.3, "incompressible: density changes are small"},
                  regime_band{0.8, "subsonic: compressibility matters"}, regime_band{1.2, "transonic"},
@@ -60,28 +132,49 @@ inline constexpr std::array regime_table{
                 5,
                 "White, Fluid Mechanics, section 9.1 (from memory)"},
     regime_rule{"Bi",
+                "",
+                regime_scope::any,
                 "transient conduction in a solid, Bi on its volume over its surface area",
                 {regime_band{0.1, "lumped capacitance holds: the solid is nearly isothermal"},
                  regime_band{regime_unbounded, "gradients inside the solid matter: lumped capacitance does not hold"}},
                 2,
                 "Incropera et al., Fundamentals of Heat and Mass Transfer, section 5.1 (from memory)"},
     regime_rule{"Ra",
+                "vertical_plate",
+                regime_scope::default_,
                 "natural convection on a vertical plate, Ra on the height",
                 {regime_band{1e9, "laminar"}, regime_band{regime_unbounded, "turbulent"}},
                 2,
                 "Incropera et al., Fundamentals of Heat and Mass Transfer, section 9.6 (Ra_x,c = 1e9, from memory)"},
     regime_rule{"Fr",
+                "open_channel",
+                regime_scope::default_,
                 "open-channel flow, Fr on the flow depth",
                 {regime_band{1.0, "subcritical (tranquil)"}, regime_band{regime_unbounded, "supercritical (rapid)"}},
                 2,
                 "Cengel & Cimbala, Fluid Mechanics: Fundamentals and Applications, chapter 13 (from memory)"},
     regime_rule{"Kn",
+                "",
+                regime_scope::any,
                 "gas flow, Kn on the mean free path over the flow's length scale",
                 {regime_band{0.01, "continuum"}, regime_band{0.1, "slip flow"}, regime_band{10, "transitional"},
                  regime_band{regime_unbounded, "free molecular"}},
                 4,
                 "Karniadakis, Beskok & Aluru, Microflows and Nanoflows, chapter 1 (from memory)"},
 };
+
+/// \brief Whether `rule` is noted for a problem in `configuration` (empty: none chosen).
+[[nodiscard]] constexpr bool regime_applies(const regime_rule& rule, std::string_view configuration) noexcept {
+  switch (rule.scope) {
+    case regime_scope::any:
+      return true;
+    case regime_scope::default_:
+      return configuration.empty() || rule.key == configuration;
+    case regime_scope::chosen:
+      return rule.key == configuration;
+  }
+  return false;
+}
 
 /// \brief The regime a named number's value falls in, under one rule.
 struct regime_note {
@@ -98,7 +191,15 @@ struct regime_note {
 /// `matches` that is the named number itself or its reciprocal (power 1 or -1) and not
 /// ambiguous; a group that is a square or a root of a number gets none (it is not that
 /// number's standard form). Bands are read on the magnitude (a flow reversed is the same flow).
-inline std::vector<regime_note> regime_notes(const std::vector<group_match>& matches, double value) {
+/// With a `configuration` (a `regime_configurations` key) only its rules and those that hold
+/// in any configuration are noted; without one, every rule of `regime_scope::default_` too.
+/// \throws analysis_error when `configuration` is neither empty nor a known key.
+inline std::vector<regime_note> regime_notes(const std::vector<group_match>& matches, double value,
+                                             std::string_view configuration = {}) {
+  if (!configuration.empty() && !is_regime_configuration(configuration))
+    throw analysis_error(
+        detail::cat("nondim: '", std::string(configuration),
+                    "' is not a configuration of the regime table (accepted: ", regime_configuration_list(), ")"));
   std::vector<regime_note> out;
   if (!std::isfinite(value)) return out;
   for (const group_match& m : matches) {
@@ -107,7 +208,7 @@ inline std::vector<regime_note> regime_notes(const std::vector<group_match>& mat
     const double number = m.power == rational{1} ? value : 1.0 / value;
     const double magnitude = std::abs(number);
     for (const regime_rule& r : regime_table) {
-      if (r.symbol != m.symbol) continue;
+      if (r.symbol != m.symbol || !regime_applies(r, configuration)) continue;
       double lower = 0.0;
       for (std::size_t b = 0; b < r.band_count; ++b) {
         if (magnitude < r.bands[b].upper || b + 1 == r.band_count) {

@@ -4,6 +4,7 @@
 
 #include <cstddef>
 #include <string>
+#include <string_view>
 #include <utility>
 #include <vector>
 #include "../../analysis.hpp"
@@ -29,7 +30,8 @@ inline json_value json_dimension(const dimension& d) {
   return m;
 }
 
-inline json_value json_group(const pi_group& g, const std::optional<nondim::group_value>& value = std::nullopt) {
+inline json_value json_group(const pi_group& g, const std::optional<nondim::group_value>& value = std::nullopt,
+                             std::string_view configuration = {}) {
   json_members exponents;
   // the non-repeating variable first, then the problem's order: as the text form reads
   const auto put = [&](std::size_t i) {
@@ -52,7 +54,7 @@ inline json_value json_group(const pi_group& g, const std::optional<nondim::grou
     out.emplace_back("value", r.value);
     if (r.uncertainty) out.emplace_back("uncertainty", *r.uncertainty);
     json_elements regimes;
-    for (const regime_note& n : regime_notes(g.matches, value->value))
+    for (const regime_note& n : regime_notes(g.matches, value->value, configuration))
       regimes.emplace_back(json_members{{"symbol", std::string(n.symbol)},
                                         {"number", regime_number(n, *value).value},
                                         {"regime", std::string(n.regime)},
@@ -82,7 +84,8 @@ inline json_members json_report_members(const analysis& a, const report_options&
   for (const auto& r : a.repeating) repeating.emplace_back(r);
   json_elements groups;
   const std::vector<std::optional<nondim::group_value>> values = report_values(a, o);
-  for (std::size_t k = 0; k < a.groups.size(); ++k) groups.push_back(json_group(a.groups[k], values[k]));
+  for (std::size_t k = 0; k < a.groups.size(); ++k)
+    groups.push_back(json_group(a.groups[k], values[k], a.configuration));
   json_elements singular;
   for (const double v : a.svd.singular_values) singular.emplace_back(v);
   json_elements isolated;

@@ -76,6 +76,10 @@ struct variable_plan {
   std::optional<double> model;      ///< given, found or measured; empty when free or undetermined
   std::optional<double> ratio;      ///< model / prototype, when both are known
   model_source source = model_source::given;
+  /// Standard uncertainties (k = 1): as given; for the dependent variable's predicted
+  /// prototype value, propagated from the factor's and the measured value's.
+  std::optional<double> prototype_uncertainty;
+  std::optional<double> model_uncertainty;
 };
 
 /// \brief One group of the plan. Group values are dimensionless (computed in SI).
@@ -113,6 +117,14 @@ struct dependent_plan {
   std::optional<double>
       prototype_over_model;  ///< empty when it is in no group or a value in its group is not determined
   std::vector<std::optional<double>> factors_by_group;  ///< the factor from each group of `groups` (when known)
+  /// Standard uncertainty (k = 1) of `prototype_over_model` by the law of propagation of
+  /// uncertainty for uncorrelated inputs (GUM, JCGM 100:2008, eq. 10), when every value it
+  /// depends on has an uncertainty; the sensitivity coefficients are those of the whole plan
+  /// (a model value the plan finds moves with the values it is found from).
+  std::optional<double> prototype_over_model_uncertainty;
+  /// The given values the factor depends on that have no uncertainty ("g (model)"), when
+  /// some others have one: why `prototype_over_model_uncertainty` is empty.
+  std::vector<std::string> lacking_uncertainty;
   bool exact = false;
   std::string rule;    ///< "F_p/F_m = (rho_p/rho_m) * (V_p/V_m)^2 * (L_p/L_m)^2"
   std::string remark;  ///< why the factor is approximate or missing; empty when exact

@@ -27,6 +27,13 @@ namespace nondim {
 ///   variables are the ones found). Group ratios are still reported: they do not depend on
 ///   the free choice.
 ///
+/// With standard uncertainties of the given values (`prototype_uncertainty`,
+/// `model_uncertainty`), the factor gets one by the law of propagation for uncorrelated
+/// inputs (GUM, JCGM 100:2008, eq. 10), with the sensitivities of the whole plan (a model
+/// value found moves with the values it is found from), when every value the factor depends
+/// on has one; otherwise `dependent_plan::lacking_uncertainty` names those without. The
+/// predicted prototype value adds the measured value's uncertainty.
+///
 /// \throws similarity_error for bad input (see `similarity_error`); never for an outcome.
 similarity_plan plan_similarity(const similarity_problem& p);
 

@@ -92,9 +92,9 @@ inline std::string group_name(const group_plan& g) {
   return g.label.empty() ? g.text : g.label;
 }
 
-}  // namespace detail
-
-NONDIM_ANALYSIS_INLINE similarity_plan plan_similarity(const similarity_problem& p) {
+/// The plan of `p` without uncertainties: `plan_similarity` less the propagation, which
+/// calls it again on perturbed values.
+inline similarity_plan plan_values(const similarity_problem& p) {
   const std::size_t d = detail::validate(p);
   const std::size_t n = p.variables.size();
   const std::size_t g = p.groups.size();
@@ -335,11 +335,28 @@ NONDIM_ANALYSIS_INLINE similarity_plan plan_similarity(const similarity_problem&
   const auto count = [](std::size_t c, const char* one, const char* many) {
     return detail::cat(std::to_string(c), " ", c == 1 ? one : many);
   };
-  if (plan.status == similarity_status::partial)
+  // An unmatched group with a model value to find was compromised by the least squares; one
+  // whose model values are all given is fixed by them, whatever the plan finds.
+  std::vector<std::string> compromised;
+  std::vector<std::string> fixed;
+  for (auto k : independent) {
+    if (plan.groups[k].matched) continue;
+    bool has_unknown = false;
+    for (auto j : unknown) has_unknown = has_unknown || p.groups[k].exponents[j] != 0;
+    (has_unknown ? compromised : fixed).push_back(detail::group_name(plan.groups[k]));
+  }
+  if (plan.status == similarity_status::partial && !fixed.empty())
     plan.notes.push_back(
-        detail::cat(count(independent.size(), "group", "groups"), " to match with ",
-                    count(f, "model value", "model values"), " to find: ", detail::join(plan.unmatched),
-                    (plan.unmatched.size() == 1 ? " cannot match" : " cannot all match"),
+        detail::cat(detail::join(fixed),
+                    (fixed.size() == 1 ? " cannot match: every value in it is given on the model, so it is"
+                                       : " cannot match: every value in them is given on the model, so they are"),
+                    " fixed by those values, not compromised (change a given model value to match ",
+                    (fixed.size() == 1 ? "it)" : "them)")));
+  if (plan.status == similarity_status::partial && !compromised.empty())
+    plan.notes.push_back(
+        detail::cat(count(independent.size() - fixed.size(), "group", "groups"), " to match with ",
+                    count(f, "model value", "model values"), " to find: ", detail::join(compromised),
+                    (compromised.size() == 1 ? " cannot match" : " cannot all match"),
                     (p.priority.empty() ? "; the model values are a least-squares compromise in the logarithms"
                                         : "; the priority groups come first, the rest are matched as nearly as "
                                           "possible (least squares in the logarithms)")));
@@ -363,6 +380,81 @@ NONDIM_ANALYSIS_INLINE similarity_plan plan_similarity(const similarity_problem&
     if (plan.variables[j].source == model_source::unused)
       plan.notes.push_back(
           detail::cat(detail::quote(names[j]), " appears in no group: similarity does not constrain its model value"));
+  return plan;
+}
+
+/// d ln(factor) / d ln(x) for the prototype (or given model) value of variable `j`, by a
+/// central difference: the factor is a product of powers of the values (the least squares
+/// is linear in their logarithms), so the difference is exact but for rounding.
+inline std::optional<double> log_sensitivity(const similarity_problem& p, std::size_t j, bool model) {
+  constexpr double step = 1e-4;
+  similarity_problem q = p;
+  std::optional<double>& x = model ? q.variables[j].model : q.variables[j].prototype;
+  const double x0 = *x;
+  std::optional<double> up;
+  std::optional<double> down;
+  try {
+    x = x0 * std::exp(step);
+    up = plan_values(q).dependent.prototype_over_model;
+    x = x0 * std::exp(-step);
+    down = plan_values(q).dependent.prototype_over_model;
+  } catch (const similarity_error&) {
+    return std::nullopt;  // a value at the edge of double's range: no difference to take
+  }
+  if (!up || !down) return std::nullopt;
+  return (std::log(*up) - std::log(*down)) / (2.0 * step);
+}
+
+/// The given uncertainties into the plan, and the factor's and the predicted value's by the
+/// law of propagation for uncorrelated inputs in its relative form (GUM eq. 12: a product
+/// of powers, with the exponents the plan's sensitivities).
+inline void propagate_uncertainty(const similarity_problem& p, similarity_plan& plan) {
+  const std::size_t d = plan.dependent.index;
+  bool any = false;
+  for (std::size_t j = 0; j < p.variables.size(); ++j) {
+    const auto& v = p.variables[j];
+    auto& vp = plan.variables[j];
+    if (j != d) vp.prototype_uncertainty = v.prototype_uncertainty;
+    if (v.model) vp.model_uncertainty = v.model_uncertainty;
+    any = any || vp.prototype_uncertainty || vp.model_uncertainty;
+  }
+  dependent_plan& dp = plan.dependent;
+  if (!any || !dp.prototype_over_model) return;
+
+  constexpr double negligible = 1e-9;  // sensitivities are ratios of integer exponents
+  double sum = 0.0;
+  for (std::size_t j = 0; j < p.variables.size(); ++j) {
+    if (j == d) continue;
+    const auto& v = p.variables[j];
+    for (const bool model : {false, true}) {
+      const std::optional<double>& x = model ? v.model : v.prototype;
+      if (!x) continue;
+      const auto s = log_sensitivity(p, j, model);
+      if (!s) return;  // no uncertainty rather than one that leaves an input out
+      if (std::abs(*s) < negligible) continue;
+      const std::optional<double>& u = model ? v.model_uncertainty : v.prototype_uncertainty;
+      if (!u) {
+        dp.lacking_uncertainty.push_back(cat(v.name, model ? " (model)" : " (prototype)"));
+        continue;
+      }
+      const double relative = *s * *u / *x;
+      sum += relative * relative;
+    }
+  }
+  if (!dp.lacking_uncertainty.empty()) return;
+  dp.prototype_over_model_uncertainty = *dp.prototype_over_model * std::sqrt(sum);
+  auto& dv = plan.variables[d];
+  if (dv.prototype && dv.model && dv.model_uncertainty) {
+    const double measured = *dv.model_uncertainty / *dv.model;
+    dv.prototype_uncertainty = std::abs(*dv.prototype) * std::sqrt(sum + measured * measured);
+  }
+}
+
+}  // namespace detail
+
+NONDIM_ANALYSIS_INLINE similarity_plan plan_similarity(const similarity_problem& p) {
+  similarity_plan plan = detail::plan_values(p);
+  detail::propagate_uncertainty(p, plan);
   return plan;
 }
 

@@ -34,6 +34,10 @@ struct similarity_variable {
   std::optional<double> model{};      ///< fixed model value; absent = to be found. For the
                                       ///< dependent variable: the value measured on the model
   std::optional<dimension> dim{};     ///< when given for every variable, each group is checked to be dimensionless
+  /// Standard uncertainties (k = 1, GUM JCGM 100:2008) of `prototype` and `model`, in the
+  /// variable's unit; uncorrelated. The scale-up factor gets one when every value it depends on has one.
+  std::optional<double> prototype_uncertainty{};
+  std::optional<double> model_uncertainty{};
 };
 
 /// \brief One dimensionless group: integer exponents aligned with the variables.

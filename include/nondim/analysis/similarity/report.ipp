@@ -8,6 +8,7 @@
 #include <string>
 #include <vector>
 #include "../../solver/core/detail/cat.hpp"
+#include "../data/rounding.hpp"
 #include "detail/text.hpp"
 #include "plan.hpp"
 #include "report.hpp"
@@ -18,6 +19,14 @@ namespace detail {
 
 inline std::string cell(const std::optional<double>& x) {
   return x ? format_number(*x) : std::string("-");
+}
+
+/// "1.1357 (standard uncertainty 0.0023)" rounded as the GUM asks (7.2.6), as `groups`
+/// writes values; "1.13568" without an uncertainty.
+inline std::string with_uncertainty(double x, const std::optional<double>& u, const std::string& unit = {}) {
+  if (!u) return cat(format_number(x), unit);
+  const rounded_value r = round_for_report(x, u);
+  return cat(r.value_text, unit, " (standard uncertainty ", r.uncertainty_text, unit, ")");
 }
 
 /// Columns padded to their widest cell, two spaces apart, each line indented by two.
@@ -93,14 +102,23 @@ NONDIM_ANALYSIS_INLINE std::string to_text(const similarity_plan& plan) {
   s += detail::cat("\nScale-up of ", dp.name, "\n");
   if (dp.rule_group) {
     s += detail::cat("  from group ", std::to_string(*dp.rule_group + 1), ": ", dp.rule);
-    if (dp.prototype_over_model) s += detail::cat(" = ", detail::format_number(*dp.prototype_over_model));
+    if (dp.prototype_over_model)
+      s += detail::cat(" = ", detail::with_uncertainty(*dp.prototype_over_model, dp.prototype_over_model_uncertainty));
     s += dp.exact ? " (exact)\n" : " (approximate)\n";
     const auto& dv = plan.variables[dp.index];
     if (dv.model && dv.prototype) {
       const std::string unit = dv.unit.empty() ? std::string{} : detail::cat(" ", dv.unit);
-      s += detail::cat("  predicted prototype ", dp.name, " = ", detail::format_number(*dv.prototype), unit,
-                       " from the measured model value ", detail::format_number(*dv.model), unit, "\n");
+      s += detail::cat("  predicted prototype ", dp.name, " = ",
+                       detail::with_uncertainty(*dv.prototype, dv.prototype_uncertainty, unit),
+                       " from the measured model value ",
+                       detail::with_uncertainty(*dv.model, dv.model_uncertainty, unit), "\n");
     }
+    if (dp.prototype_over_model_uncertainty)
+      s += "  standard uncertainties (k = 1) by the law of propagation for uncorrelated inputs (GUM, JCGM 100)\n";
+    if (!dp.lacking_uncertainty.empty())
+      s += detail::cat("  no uncertainty for the factor: ", detail::join(dp.lacking_uncertainty),
+                       (dp.lacking_uncertainty.size() == 1 ? " has" : " have"),
+                       " none (give 0 for a value taken as exact)\n");
   } else {
     s += "  none\n";
   }

@@ -79,7 +79,7 @@ inline std::vector<std::string> regime_sentences(const analysis& a,
   std::vector<std::string> out;
   for (std::size_t k = 0; k < a.groups.size() && k < values.size(); ++k) {
     if (!values[k]) continue;
-    for (const regime_note& n : regime_notes(a.groups[k].matches, values[k]->value))
+    for (const regime_note& n : regime_notes(a.groups[k].matches, values[k]->value, a.configuration))
       out.push_back((form == text_form::unicode ? "\u03a0" : "Pi") + std::to_string(k + 1) + ": " +
                     std::string(n.symbol) + " = " + regime_number(n, *values[k]).value_text + ": " +
                     std::string(n.regime) + " (" + band_text(n) + ") for " + std::string(n.configuration) +

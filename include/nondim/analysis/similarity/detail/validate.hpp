@@ -59,6 +59,19 @@ inline void check_value(const similarity_variable& v, const std::optional<double
       v.name);
 }
 
+inline void check_uncertainty(const similarity_variable& v, const std::optional<double>& u,
+                              const std::optional<double>& x, const char* which) {
+  if (!u) return;
+  if (!x)
+    throw similarity_error(
+        cat("nondim: ", quote(v.name), " has an uncertainty of its ", which, " value but no ", which, " value"),
+        v.name);
+  if (std::isfinite(*u) && *u >= 0.0) return;
+  throw similarity_error(cat("nondim: the uncertainty of the ", which, " value of ", quote(v.name),
+                             " must be a finite number >= 0, got ", format_exact(*u)),
+                         v.name);
+}
+
 inline void check_variables(const similarity_problem& p, std::size_t dependent) {
   for (std::size_t j = 0; j < p.variables.size(); ++j) {
     const auto& v = p.variables[j];
@@ -80,6 +93,8 @@ inline void check_variables(const similarity_problem& p, std::size_t dependent) 
                                    "prototype value, so it takes no prototype value"),
                                v.name);
       check_value(v, v.model, "measured model");
+      check_uncertainty(v, v.model_uncertainty, v.model, "measured model");
+      check_uncertainty(v, v.prototype_uncertainty, v.prototype, "prototype");  // it has none: refused
     } else {
       if (!v.prototype)
         throw similarity_error(cat("nondim: the prototype value of ", quote(v.name),
@@ -87,6 +102,8 @@ inline void check_variables(const similarity_problem& p, std::size_t dependent) 
                                v.name);
       check_value(v, v.prototype, "prototype");
       check_value(v, v.model, "model");
+      check_uncertainty(v, v.prototype_uncertainty, v.prototype, "prototype");
+      check_uncertainty(v, v.model_uncertainty, v.model, "model");
     }
   }
 }
