@@ -9,6 +9,7 @@
 #include "../../analysis.hpp"
 #include "../../solver/core/detail/cat.hpp"
 #include "../extraction/explain.hpp"
+#include "detail/named_relation.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"
 #include "detail/values.hpp"
@@ -109,6 +110,9 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
     s += detail::markdown_row(row);
   }
   s += "\n";
+  // the same relation in named groups, when the catalog writes it differently (as the text report)
+  if (const std::string line = detail::named_relation(a, form); !line.empty())
+    s += "**In named groups:** " + detail::markdown_escape(line) + "\n\n";
 
   if (a.isolated.empty()) {
     s += "**Excluded:** none.\n\n";
@@ -124,6 +128,21 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
     if (note != a.deficiency.explanation) s += "\n> **Note:** " + detail::markdown_escape(note) + "\n";
   for (const auto& note : detail::regime_sentences(a, values, form))
     s += "\n> **Note:** " + detail::markdown_escape(note) + "\n";
+  if (o.alternatives) {
+    if (o.alternatives->empty()) {
+      s += "\n**Alternatives:** none (no other admissible repeating variables).\n";
+      return s;
+    }
+    s += "\n**Alternatives** (other admissible repeating variables, best first by the rule):\n\n";
+    for (std::size_t i = 0; i < o.alternatives->size(); ++i) {
+      const analysis& x = (*o.alternatives)[i];
+      s += std::to_string(i + 1) + ". repeating " + detail::markdown_escape(detail::comma_list(x.repeating, form)) +
+           "\n";
+      for (std::size_t k = 0; k < x.groups.size(); ++k)
+        s += "   - \u03a0" + std::to_string(k + 1) + " = " +
+             detail::markdown_escape(x.groups[k].text(form) + detail::names_suffix(x.groups[k], form)) + "\n";
+    }
+  }
   return s;
 }
 
