@@ -1,7 +1,8 @@
 #pragma once
 /// \file repeating_rule.hpp
 /// \brief The order in which an engineer considers variables as repeating ones (DESIGN.md,
-/// "Rules for the groups"), read from their dimensions alone.
+/// "Rules for the groups"), read from their dimensions and, among variables of one
+/// dimension, from their declared kinds and names.
 ///
 /// A characteristic length first (geometric); then a velocity, a rotational speed or an
 /// acceleration such as g (kinematic); then a density (material); then the others by fewer
