@@ -251,6 +251,15 @@ TEST_SUITE("report") {
     CHECK(contains(markdown_report(analyze(p), o), "**Alternatives:** none"));
     CHECK(contains(latex_report(analyze(p), o), "% alternatives: none"));
 
+    // a group no catalog entry names keeps the text report's neutral description: the weir's
+    // P/H (White, Fluid Mechanics, ch. 10, from memory) with H and g repeating
+    problem w;
+    w.add("Q", "m^3/s").add("b", "m").add("H", "m").add("P", "m").add("g", "m/s^2");
+    options wo;
+    wo.repeating = {"H", "g"};
+    CHECK(contains(markdown_report(analyze(w, wo)), "| \u03a03 | P\u00b7H\u207b\u00b9 | ratio of two lengths |\n"));
+    CHECK(contains(latex_report(analyze(w, wo)), "\\[ \\Pi_{3} = \\frac{P}{H} \\]  % ratio of two lengths\n"));
+
     // the same relation as the groups (forced convection with k, mu, D, U repeating: Nu, Re,
     // Pr; Bergman et al., 7th ed., 6.5, from memory): no line
     problem h;

@@ -244,6 +244,10 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
         s += ", \\quad u(\\Pi_{" + std::to_string(k + 1) + "}) = " + detail::latex_number(r.uncertainty_text);
     }
     s += " \\]";
+    // without a name, the neutral description of the text report ("ratio of two lengths")
+    if (const std::string neutral = detail::neutral_description(a.groups[k], a.variables, text_form::ascii);
+        names.empty() && neutral.size() > 3)
+      s += "  % " + detail::one_line(neutral.substr(2, neutral.size() - 3));
     if (!names.empty()) {
       s += "  % " + detail::one_line(names[0].name);
       for (std::size_t m = 1; m < names.size(); ++m)

@@ -102,6 +102,11 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
     for (const auto& m : a.groups[k].matches)
       names +=
           detail::cat(names.empty() ? "" : "; ", m.symbol, detail::exponent_suffix(m.power, form), " (", m.name, ")");
+    // without a name, the neutral description of the text report ("ratio of two lengths")
+    if (names.empty()) {
+      const std::string neutral = detail::neutral_description(a.groups[k], a.variables, form);
+      if (neutral.size() > 3) names = neutral.substr(2, neutral.size() - 3);  // " (...)"
+    }
     std::vector<std::string> row{"\u03a0" + std::to_string(k + 1), detail::markdown_escape(a.groups[k].text(form)),
                                  names.empty() ? "–" : detail::markdown_escape(names)};
     const rounded_value r = values[k] ? round_for_report(values[k]->value, values[k]->uncertainty) : rounded_value{};
