@@ -57,4 +57,39 @@ TEST_SUITE("analysis compile time") {
     textbook::for_each_problem([]<const auto & P>() { compare<P>(); });
     CHECK(compared == textbook::all_problems.size());
   }
+
+  TEST_CASE("of two variables of one dimension, pi_basis() takes the first, analyze() the one a textbook repeats") {
+    // A packed bed (Bird, Stewart & Lightfoot, Transport Phenomena, 2nd ed., 6.4, the Ergun
+    // equation, from memory): the books repeat the particle diameter d_p, not the bed length
+    // L. pi_basis() sees dimensions only (pi_groups.hpp): it agrees with analyze() when d_p is
+    // listed before L, and takes L when L is listed first.
+    constexpr auto basis =
+        pi_basis<dims::pressure, dims::length, dims::length, dims::velocity, dims::density, dims::dynamic_viscosity>();
+    const auto repeats = [](const auto& b, std::size_t j) {
+      for (std::size_t k = 0; k < b.rank; ++k)
+        if (b.repeating[k] == j) return true;
+      return false;
+    };
+    problem first;
+    first.add("dp", dims::pressure)
+        .add("d_p", dims::length)
+        .add("L", dims::length)
+        .add("U", dims::velocity)
+        .add("rho", dims::density)
+        .add("mu", dims::dynamic_viscosity);
+    CHECK(repeats(basis, 1));  // d_p, listed first
+    CHECK_FALSE(repeats(basis, 2));
+    CHECK(analyze(first).is_repeating("d_p"));
+
+    problem second;
+    second.add("dp", dims::pressure)
+        .add("L", dims::length)
+        .add("d_p", dims::length)
+        .add("U", dims::velocity)
+        .add("rho", dims::density)
+        .add("mu", dims::dynamic_viscosity);
+    CHECK(repeats(basis, 1));  // the same dimensions: now L, listed first
+    CHECK(analyze(second).is_repeating("d_p"));
+    CHECK_FALSE(analyze(second).is_repeating("L"));
+  }
 }

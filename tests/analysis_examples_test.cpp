@@ -10,19 +10,12 @@ using test_support::expected_group;
 
 TEST_SUITE("analysis examples") {
   TEST_CASE("drag on a sphere gives the force coefficient and the Reynolds number") {
-    // White, Fluid Mechanics, 7th ed., Sec. 5.3, F = f(D, V, rho, mu) reduces to
-    // F/(rho V^2 D^2) = g(rho V D / mu) (from memory).
-    problem p;
-    p.add("F", dims::force)
-        .add("D", dims::length)
-        .add("V", dims::velocity)
-        .add("rho", dims::density)
-        .add("mu", dims::dynamic_viscosity);
-    const analysis a = analyze(p);
+    // White, Fluid Mechanics, 7th ed., Sec. 5.3 (the case's source and groups:
+    // tests/analysis_support.hpp)
+    const auto& c = test_support::textbook_case_titled("drag on a sphere");
+    const problem p = test_support::problem_of(c);
+    const analysis a = test_support::check_textbook_case(c);
     CHECK(a.rank == 3);
-    CHECK(a.repeating == std::vector<std::string>{"D", "V", "rho"});
-    check_groups(a, {expected_group{{"F", 1}, {"rho", -1}, {"V", -2}, {"D", -2}},
-                     expected_group{{"mu", 1}, {"rho", -1}, {"V", -1}, {"D", -1}}});
     CHECK(a.isolated.empty());
     CHECK(a.svd.agrees);
 
@@ -37,43 +30,21 @@ TEST_SUITE("analysis examples") {
   }
 
   TEST_CASE("pressure drop in a rough pipe gives Euler, Reynolds, relative roughness and length ratio") {
-    // White, Fluid Mechanics, 7th ed., Sec. 6.6 (Moody chart): dp/(rho V^2) = f(Re, eps/d, L/d);
-    // also Fox & McDonald, Introduction to Fluid Mechanics, Sec. 8.7 (from memory).
-    problem p;
-    p.add("dp", dims::pressure)
-        .add("rho", dims::density)
-        .add("V", dims::velocity)
-        .add("d", dims::length)
-        .add("mu", dims::dynamic_viscosity)
-        .add("eps", dims::length)
-        .add("L", dims::length);
-    const analysis a = analyze(p);
-    CHECK(a.rank == 3);
-    CHECK(a.repeating == std::vector<std::string>{"rho", "V", "d"});
-    check_groups(a, {expected_group{{"dp", 1}, {"rho", -1}, {"V", -2}},
-                     expected_group{{"mu", 1}, {"rho", -1}, {"V", -1}, {"d", -1}},
-                     expected_group{{"eps", 1}, {"d", -1}}, expected_group{{"L", 1}, {"d", -1}}});
+    // White, Fluid Mechanics, 7th ed., Sec. 6.6 (Moody chart), and Munson et al., 6th ed.,
+    // Sec. 8.3 with the pipe's length first (sources and groups: tests/analysis_support.hpp)
+    for (const char* title : {"pressure drop in a rough pipe (White)",
+                              "pressure drop in a pipe (Munson), the length before the diameter"}) {
+      const analysis a = test_support::check_textbook_case(test_support::textbook_case_titled(title));
+      CHECK(a.rank == 3);
+    }
   }
 
   TEST_CASE("pump performance gives the head, power and flow coefficients and a Reynolds number") {
-    // Fox & McDonald, Introduction to Fluid Mechanics, Sec. 10.3 (pump similarity rules):
-    // gH/(omega^2 D^2), P/(rho omega^3 D^5), Q/(omega D^3), mu/(rho omega D^2) (from memory);
-    // White, Fluid Mechanics, 7th ed., Sec. 11.4, C_H, C_P, C_Q (from memory).
-    problem p;
-    p.add("gH", dims::specific_energy)
-        .add("P", dims::power)
-        .add("Q", dims::volume_flow_rate)
-        .add("omega", dims::angular_velocity)
-        .add("D", dims::length)
-        .add("rho", dims::density)
-        .add("mu", dims::dynamic_viscosity);
-    const analysis a = analyze(p);
+    // Fox & McDonald, Sec. 10.3; White, 7th ed., Sec. 11.4 (sources and groups:
+    // tests/analysis_support.hpp)
+    const analysis a = test_support::check_textbook_case(
+        test_support::textbook_case_titled("pump performance with the angular speed"));
     CHECK(a.rank == 3);
-    CHECK(a.repeating == std::vector<std::string>{"omega", "D", "rho"});
-    check_groups(a, {expected_group{{"gH", 1}, {"omega", -2}, {"D", -2}},
-                     expected_group{{"P", 1}, {"rho", -1}, {"omega", -3}, {"D", -5}},
-                     expected_group{{"Q", 1}, {"omega", -1}, {"D", -3}},
-                     expected_group{{"mu", 1}, {"rho", -1}, {"omega", -1}, {"D", -2}}});
     CHECK(a.groups[0].text() == "gH\u00b7\u03c9\u207b\u00b2\u00b7D\u207b\u00b2");  // gH·ω⁻²·D⁻²
   }
 
@@ -180,13 +151,12 @@ TEST_SUITE("analysis examples") {
 
   TEST_CASE("G. I. Taylor's blast wave: R^5 rho / (E t^2)") {
     // G. I. Taylor, "The formation of a blast wave by a very intense explosion. I",
-    // Proc. R. Soc. A 201 (1950) 159-174: R = C (E t^2 / rho)^(1/5).
-    problem p;
-    p.add("R", dims::length).add("E", dims::energy).add("rho", dims::density).add("t", dims::time);
-    const analysis a = analyze(p);
+    // Proc. R. Soc. A 201 (1950) 159-174: R = C (E t^2 / rho)^(1/5) (the case:
+    // tests/analysis_support.hpp).
+    const auto& taylor = test_support::textbook_case_titled("G. I. Taylor's blast wave");
+    problem p = test_support::problem_of(taylor);
+    const analysis a = test_support::check_textbook_case(taylor);
     CHECK(a.rank == 3);
-    CHECK(a.repeating == std::vector<std::string>{"E", "rho", "t"});
-    check_groups(a, {expected_group{{"R", 5}, {"rho", 1}, {"E", -1}, {"t", -2}}});
 
     SUBCASE("with the ambient pressure: p0^5 t^6 / (E^2 rho^3)") {
       // Same paper: the strong-shock limit neglects p0, whose group is
@@ -207,21 +177,9 @@ TEST_SUITE("analysis examples") {
   }
 
   TEST_CASE("a ship's resistance: force coefficient, 1/Re and the inverse square Froude number") {
-    // White, Fluid Mechanics, 7th ed., Sec. 5.4 (ship models: Froude and Reynolds scaling
-    // cannot both be met), from memory.
-    problem p;
-    p.add("F", dims::force)
-        .add("V", dims::velocity)
-        .add("L", dims::length)
-        .add("rho", dims::density)
-        .add("mu", dims::dynamic_viscosity)
-        .add("g", dims::acceleration);
-    const analysis a = analyze(p);
+    // White, Fluid Mechanics, 7th ed., Sec. 5.4 (source and groups: tests/analysis_support.hpp)
+    const analysis a = test_support::check_textbook_case(test_support::textbook_case_titled("a ship's resistance"));
     CHECK(a.rank == 3);
-    CHECK(a.repeating == std::vector<std::string>{"V", "L", "rho"});
-    check_groups(a, {expected_group{{"F", 1}, {"rho", -1}, {"V", -2}, {"L", -2}},
-                     expected_group{{"mu", 1}, {"rho", -1}, {"V", -1}, {"L", -1}},
-                     expected_group{{"g", 1}, {"L", 1}, {"V", -2}}});
   }
 
   TEST_CASE("capillary rise: h/D, the Bond number and the contact angle by itself") {

@@ -10,6 +10,7 @@
 
 #include <cstdint>
 #include <map>
+#include <stdexcept>
 #include <string>
 #include <utility>
 #include <vector>
@@ -130,6 +131,287 @@ inline nondim::problem sphere_drag() {
       .add("D", nondim::dims::length)
       .add("mu", nondim::dims::dynamic_viscosity);
   return p;
+}
+
+}  // namespace test_support
+
+namespace test_support {
+
+/// One variable of a textbook problem: its name, its dimension and, when the problem
+/// declares one, its kind (names/quantity_kind.hpp).
+struct textbook_variable {
+  std::string name;
+  nondim::dimension dim;
+  std::string kind{};
+};
+
+/// A textbook problem whose repeating variables the book names. The groups were derived by
+/// hand from the dimensions (SI Brochure 9th ed., tables 2 and 4), not copied from output.
+struct textbook_case {
+  std::string title;
+  std::string source;                        ///< book and section; "from memory" where recalled rather than re-read
+  std::vector<textbook_variable> variables;  ///< the first is the dependent variable
+  std::vector<std::string> repeating;        ///< in input order, as `analyze()` reports them
+  std::vector<expected_group> groups;        ///< the dependent variable's group first
+};
+
+/// The textbook problems that the repeating rule (tests/repeating_rule_test.cpp) and the
+/// worked examples (tests/analysis_examples_test.cpp) check, each with its source.
+inline const std::vector<textbook_case>& textbook_cases() {
+  using namespace nondim;
+  const dimension per_kelvin = dimension{} / dims::temperature;
+  static const std::vector<textbook_case> cases{
+      {"drag on a sphere",
+       "White, Fluid Mechanics, 7th ed., Sec. 5.3: F/(rho V^2 D^2) = g(rho V D / mu) (from memory)",
+       {{"F", dims::force},
+        {"D", dims::length},
+        {"V", dims::velocity},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity}},
+       {"D", "V", "rho"},
+       {{{"F", 1}, {"rho", -1}, {"V", -2}, {"D", -2}}, {{"mu", 1}, {"rho", -1}, {"V", -1}, {"D", -1}}}},
+      {"pressure drop in a rough pipe (White)",
+       "White, Fluid Mechanics, 7th ed., Sec. 6.6 (Moody chart): dp/(rho V^2) = f(Re, eps/d, L/d); "
+       "Fox & McDonald, Introduction to Fluid Mechanics, Sec. 8.7 (from memory)",
+       {{"dp", dims::pressure},
+        {"rho", dims::density},
+        {"V", dims::velocity},
+        {"d", dims::length},
+        {"mu", dims::dynamic_viscosity},
+        {"eps", dims::length},
+        {"L", dims::length}},
+       {"rho", "V", "d"},
+       {{{"dp", 1}, {"rho", -1}, {"V", -2}},
+        {{"mu", 1}, {"rho", -1}, {"V", -1}, {"d", -1}},
+        {{"eps", 1}, {"d", -1}},
+        {{"L", 1}, {"d", -1}}}},
+      {"pressure drop in a pipe (Munson), the length before the diameter",
+       "Munson, Young & Okiishi, Fundamentals of Fluid Mechanics, 6th ed., Sec. 8.3: dp = F(D, l, eps, mu, V, rho) "
+       "gives dp/(rho V^2) = f(rho V D/mu, l/D, eps/D) with D, V, rho repeating (from memory); the pipe's "
+       "length l is listed first here, and the diameter still repeats",
+       {{"dp", dims::pressure},
+        {"l", dims::length},
+        {"eps", dims::length},
+        {"D", dims::length},
+        {"mu", dims::dynamic_viscosity},
+        {"V", dims::velocity},
+        {"rho", dims::density}},
+       {"D", "V", "rho"},
+       {{{"dp", 1}, {"rho", -1}, {"V", -2}},
+        {{"l", 1}, {"D", -1}},
+        {{"eps", 1}, {"D", -1}},
+        {{"mu", 1}, {"rho", -1}, {"V", -1}, {"D", -1}}}},
+      {"pump performance with the angular speed",
+       "Fox & McDonald, Introduction to Fluid Mechanics, Sec. 10.3 (pump similarity rules): gH/(omega^2 D^2), "
+       "P/(rho omega^3 D^5), Q/(omega D^3), mu/(rho omega D^2); White, 7th ed., Sec. 11.4 (from memory)",
+       {{"gH", dims::specific_energy},
+        {"P", dims::power},
+        {"Q", dims::volume_flow_rate},
+        {"omega", dims::angular_velocity},
+        {"D", dims::length},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity}},
+       {"omega", "D", "rho"},
+       {{{"gH", 1}, {"omega", -2}, {"D", -2}},
+        {{"P", 1}, {"rho", -1}, {"omega", -3}, {"D", -5}},
+        {{"Q", 1}, {"omega", -1}, {"D", -3}},
+        {{"mu", 1}, {"rho", -1}, {"omega", -1}, {"D", -2}}}},
+      {"pump performance with the rotational speed",
+       "White, Fluid Mechanics, 7th ed., Sec. 11.4: C_Q = Q/(n D^3), C_H = gH/(n^2 D^2), C_P = P/(rho n^3 D^5), "
+       "n the rotational speed (from memory); power first here",
+       {{"P", dims::power},
+        {"Q", dims::volume_flow_rate},
+        {"gH", dims::specific_energy},
+        {"n", dims::frequency},
+        {"D", dims::length},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity}},
+       {"n", "D", "rho"},
+       {{{"P", 1}, {"rho", -1}, {"n", -3}, {"D", -5}},
+        {{"Q", 1}, {"n", -1}, {"D", -3}},
+        {{"gH", 1}, {"n", -2}, {"D", -2}},
+        {{"mu", 1}, {"rho", -1}, {"n", -1}, {"D", -2}}}},
+      {"a ship's resistance",
+       "White, Fluid Mechanics, 7th ed., Sec. 5.4 (ship models: Froude and Reynolds scaling cannot both be met), "
+       "from memory",
+       {{"F", dims::force},
+        {"V", dims::velocity},
+        {"L", dims::length},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity},
+        {"g", dims::acceleration}},
+       {"V", "L", "rho"},
+       {{{"F", 1}, {"rho", -1}, {"V", -2}, {"L", -2}},
+        {{"mu", 1}, {"rho", -1}, {"V", -1}, {"L", -1}},
+        {{"g", 1}, {"L", 1}, {"V", -2}}}},
+      {"a ship's resistance with surface tension",
+       "White, Fluid Mechanics, 7th ed., Sec. 5.4: F/(rho V^2 L^2) = f(Re, Fr, We) with L, V, rho repeating "
+       "(from memory)",
+       {{"F", dims::force},
+        {"V", dims::velocity},
+        {"L", dims::length},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity},
+        {"g", dims::acceleration},
+        {"sigma", dims::surface_tension}},
+       {"V", "L", "rho"},
+       {{{"F", 1}, {"rho", -1}, {"V", -2}, {"L", -2}},
+        {{"mu", 1}, {"rho", -1}, {"V", -1}, {"L", -1}},
+        {{"g", 1}, {"L", 1}, {"V", -2}},
+        {{"sigma", 1}, {"rho", -1}, {"V", -2}, {"L", -1}}}},
+      {"G. I. Taylor's blast wave",
+       "G. I. Taylor, Proc. R. Soc. A 201 (1950) 159-174: R = C (E t^2 / rho)^(1/5); the rule takes E, rho, t",
+       {{"R", dims::length}, {"E", dims::energy}, {"rho", dims::density}, {"t", dims::time}},
+       {"E", "rho", "t"},
+       {{{"R", 5}, {"rho", 1}, {"E", -1}, {"t", -2}}}},
+      {"weir flow: the head, g and the density",
+       "Munson, Young & Okiishi, Fundamentals of Fluid Mechanics, 6th ed., Sec. 10.6 (weirs): Q = C b sqrt(g) "
+       "H^(3/2), the flow scaled with H and g; Weber and Reynolds numbers matter only for low heads (from memory)",
+       {{"Q", dims::volume_flow_rate},
+        {"H", dims::length},
+        {"b", dims::length},
+        {"g", dims::acceleration},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity},
+        {"sigma", dims::surface_tension}},
+       {"H", "g", "rho"},
+       {{{"Q", 2}, {"H", -5}, {"g", -1}},
+        {{"b", 1}, {"H", -1}},
+        {{"mu", 2}, {"H", -3}, {"g", -1}, {"rho", -2}},
+        {{"sigma", 1}, {"H", -2}, {"g", -1}, {"rho", -1}}}},
+      {"a spray: nozzle diameter, velocity, liquid density",
+       "Lefebvre, Atomization and Sprays (1989), Ch. 6: d/D = f(We, Oh or Re, rho_g/rho_l), We = rho U^2 D / sigma "
+       "(from memory); the liquid density is first, so it repeats",
+       {{"d32", dims::length},
+        {"D", dims::length},
+        {"U", dims::velocity},
+        {"rho_l", dims::density},
+        {"rho_g", dims::density},
+        {"mu_l", dims::dynamic_viscosity},
+        {"sigma", dims::surface_tension}},
+       {"D", "U", "rho_l"},
+       {{{"d32", 1}, {"D", -1}},
+        {{"rho_g", 1}, {"rho_l", -1}},
+        {{"mu_l", 1}, {"D", -1}, {"U", -1}, {"rho_l", -1}},
+        {{"sigma", 1}, {"D", -1}, {"U", -2}, {"rho_l", -1}}}},
+      {"a rising bubble: d, g, the liquid density",
+       "Clift, Grace & Weber, Bubbles, Drops and Particles (1978), Ch. 2: U/sqrt(g d), Eo = g drho d^2 / sigma, "
+       "Mo = g mu^4 drho / (rho^2 sigma^3) (from memory); the density difference is listed before the "
+       "liquid's density here, and the liquid's still repeats",
+       {{"U", dims::velocity},
+        {"d", dims::length},
+        {"g", dims::acceleration},
+        {"drho", dims::density},
+        {"rho", dims::density},
+        {"sigma", dims::surface_tension},
+        {"mu", dims::dynamic_viscosity}},
+       {"d", "g", "rho"},
+       {{{"U", 2}, {"d", -1}, {"g", -1}},
+        {{"drho", 1}, {"rho", -1}},
+        {{"sigma", 1}, {"d", -2}, {"g", -1}, {"rho", -1}},
+        {{"mu", 2}, {"d", -3}, {"g", -1}, {"rho", -2}}}},
+      {"natural convection: L, g, rho and the temperature difference",
+       "Bergman, Lavine, Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 7th ed., Sec. 9.2: "
+       "Gr = g beta dT L^3 / nu^2, beta dT a group of its own (from memory)",
+       {{"h", dims::heat_transfer_coefficient},
+        {"beta", per_kelvin},
+        {"L", dims::length},
+        {"g", dims::acceleration},
+        {"dT", dims::temperature},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity},
+        {"k", dims::thermal_conductivity},
+        {"cp", dims::specific_heat_capacity}},
+       {"L", "g", "dT", "rho"},
+       {{{"h", 2}, {"dT", 2}, {"rho", -2}, {"g", -3}, {"L", -3}},
+        {{"beta", 1}, {"dT", 1}},
+        {{"mu", 2}, {"rho", -2}, {"g", -1}, {"L", -3}},
+        {{"k", 2}, {"dT", 2}, {"rho", -2}, {"g", -3}, {"L", -5}},
+        {{"cp", 1}, {"dT", 1}, {"g", -1}, {"L", -1}}}},
+      {"a boundary layer without a velocity: nu repeats",
+       "Schlichting, Boundary-Layer Theory, Ch. 7 (from memory): with no velocity, nu is the only variable with T; "
+       "t nu / x^2 is a Fourier-number form",
+       {{"t", dims::time}, {"x", dims::length}, {"nu", dims::kinematic_viscosity}},
+       {"x", "nu"},
+       {{{"t", 1}, {"nu", 1}, {"x", -2}}}},
+      {"a packed bed: the particle diameter, not the bed length",
+       "Bird, Stewart & Lightfoot, Transport Phenomena, 2nd ed., Sec. 6.4 (the Ergun equation): "
+       "dp d_p / (rho U^2 L) = f(Re_p, eps) with Re_p = rho U d_p / mu, so d_p repeats and L/d_p is a group "
+       "(from memory)",
+       {{"dp", dims::pressure},
+        {"L", dims::length},
+        {"d_p", dims::length},
+        {"eps", dims::dimensionless},
+        {"U", dims::velocity},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity}},
+       {"d_p", "U", "rho"},
+       {{{"dp", 1}, {"rho", -1}, {"U", -2}},
+        {{"L", 1}, {"d_p", -1}},
+        {{"eps", 1}},
+        {{"mu", 1}, {"rho", -1}, {"U", -1}, {"d_p", -1}}}},
+      {"a packed bed with declared kinds: depth of fill and grain size",
+       "Bird, Stewart & Lightfoot, Transport Phenomena, 2nd ed., Sec. 6.4 (from memory), as above; the names "
+       "are not conventional, the declared kind of the grain size says it is a diameter",
+       {{"dp", dims::pressure},
+        {"depth", dims::length},
+        {"grain", dims::length, "diameter"},
+        {"U", dims::velocity},
+        {"rho", dims::density},
+        {"mu", dims::dynamic_viscosity}},
+       {"grain", "U", "rho"},
+       {{{"dp", 1}, {"rho", -1}, {"U", -2}},
+        {{"depth", 1}, {"grain", -1}},
+        {{"mu", 1}, {"rho", -1}, {"U", -1}, {"grain", -1}}}},
+      {"a heat exchanger: C_min repeats, giving NTU and the capacity ratio",
+       "Bergman, Lavine, Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 7th ed., Sec. 11.4: "
+       "epsilon = q/(C_min dT_max) = f(NTU, C_r), NTU = UA/C_min, C_r = C_min/C_max (from memory); "
+       "UA is listed first, and the heat-capacity rate still repeats",
+       {{"q", dims::power},
+        {"UA", thermal_conductance},
+        {"C_max", thermal_conductance},
+        {"C_min", thermal_conductance},
+        {"dT_max", dims::temperature}},
+       {"C_min", "dT_max"},
+       {{{"q", 1}, {"C_min", -1}, {"dT_max", -1}}, {{"UA", 1}, {"C_min", -1}}, {{"C_max", 1}, {"C_min", -1}}}},
+      {"a heat exchanger with declared kinds",
+       "Bergman et al., 7th ed., Sec. 11.4 (from memory), as above; the names are not conventional, the "
+       "declared kinds say which is the conductance and which the smaller heat-capacity rate",
+       {{"duty", dims::power},
+        {"G", thermal_conductance, "overall_conductance"},
+        {"Wc", thermal_conductance, "min_heat_capacity_rate"},
+        {"dT_in", dims::temperature}},
+       {"Wc", "dT_in"},
+       {{{"duty", 1}, {"Wc", -1}, {"dT_in", -1}}, {{"G", 1}, {"Wc", -1}}}},
+  };
+  return cases;
+}
+
+/// The case of `textbook_cases()` titled `title`.
+inline const textbook_case& textbook_case_titled(const std::string& title) {
+  for (const auto& c : textbook_cases())
+    if (c.title == title) return c;
+  throw std::invalid_argument("no textbook case titled " + title);
+}
+
+/// The problem of case `c`, with its declared kinds.
+inline nondim::problem problem_of(const textbook_case& c) {
+  nondim::problem p;
+  for (const auto& v : c.variables) {
+    p.add(v.name, v.dim);
+    if (!v.kind.empty()) p.declare_kind(v.name, v.kind);
+  }
+  return p;
+}
+
+/// Analyses case `c` with the rule's choice and checks the book's repeating variables and
+/// groups; returns the analysis for further checks.
+inline nondim::analysis check_textbook_case(const textbook_case& c) {
+  INFO(c.title << " -- " << c.source);
+  const nondim::analysis a = nondim::analyze(problem_of(c));
+  CHECK(a.repeating == c.repeating);
+  check_groups(a, c.groups);
+  return a;
 }
 
 }  // namespace test_support

@@ -429,8 +429,9 @@ TEST_SUITE("catalog") {
         {"Ca_v", 1, {{"dp_v", dims::pressure, 1}, {"rho", dims::density, -1}, {"V", dims::velocity, -2}}},
         // Incropera et al., ch. 11 (from memory): eps = q/q_max, NTU = UA/C_min, C_r = C_min/C_max
         {"eps_HX", 1, {{"q", dims::power, 1}, {"q_max", dims::power, -1}}},
-        {"NTU", 1, {{"UA", dims::heat_capacity, 1}, {"C_min", dims::heat_capacity, -1}}},
-        {"C_r", 1, {{"C_min", dims::heat_capacity, 1}, {"C_max", dims::heat_capacity, -1}}},
+        // UA and C = m_dot c_p in W/K (ISO 80000-5, thermal conductance), not J/K
+        {"NTU", 1, {{"UA", thermal_conductance, 1}, {"C_min", thermal_conductance, -1}}},
+        {"C_r", 1, {{"C_min", thermal_conductance, 1}, {"C_max", thermal_conductance, -1}}},
         // Incropera et al., ch. 8 (from memory): the Sieder-Tate factor (mu/mu_s)^0.14
         {"mu/mu_w", 1, {{"mu", dims::dynamic_viscosity, 1}, {"mu_s", dims::dynamic_viscosity, -1}}},
     };

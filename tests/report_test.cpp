@@ -214,6 +214,65 @@ TEST_SUITE("report") {
     CHECK(contains(text_report(analyze(p)), "in named groups: Nu = f(Re, Pr)\n"));
   }
 
+  TEST_CASE("Markdown and LaTeX show the relation in named groups and the alternatives, as the text does") {
+    // the drag on a sphere (White, 7th ed., 5.2-5.3, from memory): the classical groups are
+    // C_D and 1/Re, the books write C_D = f(Re); the other sets are D, V, mu (the Stokes form
+    // F/(mu V D), with rho V D/mu = Re), D, rho, mu and V, rho, mu (by hand)
+    problem q;
+    q.add("F", "N").add("D", "m").add("V", "m/s").add("rho", "kg/m^3").add("mu", "Pa*s");
+    const analysis a = analyze(q);
+    report_options o;
+    o.alternatives = alternatives(q);
+    const std::string md = markdown_report(a, o);
+    CHECK(contains(md, "\n**In named groups:** C\\_D = f(Re)\n"));
+    CHECK(contains(md,
+                   "\n**Alternatives** (other admissible repeating variables, best first by the rule):\n\n"
+                   "1. repeating D, V, \u03bc\n"
+                   "   - \u03a01 = F\u00b7D\u207b\u00b9\u00b7V\u207b\u00b9\u00b7\u03bc\u207b\u00b9\n"
+                   "   - \u03a02 = \u03c1\u00b7D\u00b7V\u00b7\u03bc\u207b\u00b9 = Re (Reynolds number)\n"
+                   "2. repeating D, \u03c1, \u03bc\n"));
+    CHECK(contains(md, "3. repeating V, \u03c1, \u03bc\n"));
+    const std::string tex = latex_report(a, o);
+    CHECK(contains(tex, "\\[ C_{\\mathrm{D}} = f(\\mathrm{Re}) \\]  % in named groups\n"));
+    CHECK(contains(tex,
+                   "% alternatives (other admissible repeating variables, best first by the rule)\n"
+                   "% 1. repeating D, V, mu\n"
+                   "\\[ \\Pi_{1} = \\frac{F}{D V \\mu}, \\quad \\Pi_{2} = \\frac{\\rho D V}{\\mu} = "
+                   "\\mathrm{Re} \\]\n"));
+
+    // none asked for: no list; none admissible: said so (the pendulum, Fox and McDonald,
+    // 8th ed., 7.2: L, m, g are the only independent set)
+    CHECK_FALSE(contains(markdown_report(a), "Alternatives"));
+    CHECK_FALSE(contains(latex_report(a), "alternatives"));
+    problem p;
+    p.add("t", "s").add("L", "m").add("m", "kg").add("g", "m/s^2");
+    o.alternatives = alternatives(p);
+    CHECK(contains(markdown_report(analyze(p), o), "**Alternatives:** none"));
+    CHECK(contains(latex_report(analyze(p), o), "% alternatives: none"));
+
+    // a group no catalog entry names keeps the text report's neutral description: the weir's
+    // P/H (White, Fluid Mechanics, ch. 10, from memory) with H and g repeating
+    problem w;
+    w.add("Q", "m^3/s").add("b", "m").add("H", "m").add("P", "m").add("g", "m/s^2");
+    options wo;
+    wo.repeating = {"H", "g"};
+    CHECK(contains(markdown_report(analyze(w, wo)), "| \u03a03 | P\u00b7H\u207b\u00b9 | ratio of two lengths |\n"));
+    CHECK(contains(latex_report(analyze(w, wo)), "\\[ \\Pi_{3} = \\frac{P}{H} \\]  % ratio of two lengths\n"));
+
+    // the same relation as the groups (forced convection with k, mu, D, U repeating: Nu, Re,
+    // Pr; Bergman et al., 7th ed., 6.5, from memory): no line
+    problem h;
+    h.add("h", "W/(m^2*K)").add("k", "W/(m*K)").add("D", "m").add("U", "m/s").add("rho", "kg/m^3");
+    h.add("mu", "Pa*s").add("cp", "J/(kg*K)");
+    options given;
+    given.repeating = {"k", "mu", "D", "U"};
+    CHECK_FALSE(contains(markdown_report(analyze(h, given)), "In named groups"));
+    CHECK_FALSE(contains(latex_report(analyze(h, given)), "in named groups"));
+    CHECK(contains(markdown_report(analyze(h)), "**In named groups:** Nu = f(Re, Pr)\n"));
+    CHECK(contains(latex_report(analyze(h)),
+                   "\\[ \\mathrm{Nu} = f(\\mathrm{Re}, \\mathrm{Pr}) \\]  % in named groups\n"));
+  }
+
   TEST_CASE("a fractional exponent is the string p/q in JSON") {
     problem p;  // K = Y sigma sqrt(pi a) (Anderson, Fracture Mechanics, 3rd ed., 2.6): K in Pa*m^(1/2)
     p.add("sigma", "MPa").add("K", "MPa*m^(1/2)").add("a", "mm");

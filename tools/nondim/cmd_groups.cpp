@@ -89,8 +89,6 @@ subcommand add_groups(CLI::App& app) {
         if (!args->basis.empty()) in.options.form = args->basis == "named" ? basis::named : basis::classical;
         const analysis a = analyze_input(in);
         if (args->alternatives) {
-          if (args->format == "latex" || args->format == "markdown")
-            throw input_error(with_prefix("--alternatives is available with --format text or json"));
           in.report.alternatives = alternatives(in.problem, in.options);  // valid options: analyze_input passed
         }
         try {

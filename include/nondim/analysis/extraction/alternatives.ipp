@@ -33,11 +33,16 @@ NONDIM_ANALYSIS_INLINE std::vector<analysis> alternatives(const problem& p, cons
   if (max == 0 || first.rank == 0) return out;
   const std::vector<variable>& vars = p.variables();
   std::vector<dimension> dims;
+  std::vector<repeating_preference> preference;
   dims.reserve(vars.size());
-  for (const auto& v : vars) dims.push_back(v.dim);
+  preference.reserve(vars.size());
+  for (const auto& v : vars) {
+    dims.push_back(v.dim);
+    preference.push_back(repeating_preference_of(v.name, v.dim, v.kind));
+  }
   const std::size_t dependent = *first.index_of(first.dependent);
   std::vector<std::size_t> candidates;
-  for (std::size_t j : repeating_candidate_order(dims, dependent))
+  for (std::size_t j : repeating_candidate_order(dims, dependent, preference))
     if (!dims[j].is_dimensionless()) candidates.push_back(j);
 
   std::vector<std::size_t> taken;  // the primary set, sorted, to leave out

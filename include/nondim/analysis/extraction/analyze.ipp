@@ -57,15 +57,18 @@ inline analysis classical_analysis(const problem& p, const options& o) {
 
   std::vector<dimension> dims;
   std::vector<std::string> names;
+  std::vector<repeating_preference> preference;
   dims.reserve(n);
   names.reserve(n);
+  preference.reserve(n);
   for (const auto& v : vars) {
     dims.push_back(v.dim);
     names.push_back(v.name);
+    preference.push_back(repeating_preference_of(v.name, v.dim, v.kind));
   }
 
-  const detail::exact_outcome x =
-      detail::run_exact(o.arithmetic, [&]<class F>() { return detail::exact_core<F>(dims, names, given, dependent); });
+  const detail::exact_outcome x = detail::run_exact(
+      o.arithmetic, [&]<class F>() { return detail::exact_core<F>(dims, names, given, dependent, preference); });
 
   analysis a;
   a.rank = x.rank;

@@ -105,6 +105,10 @@ struct quantity_kind_info {
   std::string_view names;  ///< conventional variable names, separated by spaces
 };
 
+/// W/K: an overall conductance UA and a heat-capacity rate ṁc_p (ISO 80000-5, thermal
+/// conductance); not a heat capacity, J/K.
+inline constexpr dimension thermal_conductance = dims::power / dims::temperature;
+
 /// \brief Every kind, indexed by the value of `quantity_kind`.
 ///
 /// Conventional names are common practice in the handbooks named above (no single
@@ -231,14 +235,14 @@ inline constexpr std::array quantity_kinds{
     quantity_kind_info{quantity_kind::max_heat_rate, "max_heat_rate", "largest possible heat transfer rate",
                        dims::power, quantity_kind::unspecified, "q_max Q_max qmax Qmax"},
     quantity_kind_info{quantity_kind::overall_conductance, "overall_conductance", "overall conductance UA",
-                       dims::heat_capacity, quantity_kind::unspecified, "UA U_A UA_total"},
+                       thermal_conductance, quantity_kind::unspecified, "UA U_A UA_total"},
     quantity_kind_info{quantity_kind::heat_capacity_rate, "heat_capacity_rate", "heat-capacity rate (ṁc_p)",
-                       dims::heat_capacity, quantity_kind::unspecified, "C C_h C_c mcp m_dot_cp"},
+                       thermal_conductance, quantity_kind::unspecified, "C C_h C_c mcp m_dot_cp"},
     quantity_kind_info{quantity_kind::min_heat_capacity_rate, "min_heat_capacity_rate",
-                       "smaller heat-capacity rate C_min", dims::heat_capacity, quantity_kind::heat_capacity_rate,
+                       "smaller heat-capacity rate C_min", thermal_conductance, quantity_kind::heat_capacity_rate,
                        "C_min Cmin"},
     quantity_kind_info{quantity_kind::max_heat_capacity_rate, "max_heat_capacity_rate",
-                       "larger heat-capacity rate C_max", dims::heat_capacity, quantity_kind::heat_capacity_rate,
+                       "larger heat-capacity rate C_max", thermal_conductance, quantity_kind::heat_capacity_rate,
                        "C_max Cmax"},
     // mass transfer
     quantity_kind_info{quantity_kind::mass_diffusivity, "mass_diffusivity", "diffusion coefficient",

@@ -5,9 +5,11 @@
 #include <array>
 #include <cstddef>
 #include <cstdint>
+#include <optional>
 #include <string>
 #include <string_view>
 #include "../../analysis.hpp"
+#include "detail/named_relation.hpp"
 #include "detail/names.hpp"
 #include "detail/values.hpp"
 #include "latex.hpp"
@@ -202,6 +204,26 @@ NONDIM_ANALYSIS_INLINE std::string latex(const pi_group& g) {
   return "\\frac{" + (num.empty() ? std::string("1") : num) + "}{" + den + "}";
 }
 
+namespace detail {
+
+/// Group `g` in LaTeX as the catalog number it matches first, with its power, or else as
+/// its product: the terms of `relation()`.
+inline std::string latex_written(const pi_group& g) {
+  if (g.matches.empty()) return latex(g);
+  return latex_power(latex_symbol(g.matches.front().symbol), g.matches.front().power);
+}
+
+/// `relation(a)` in LaTeX: `\mathrm{Nu} = f(\mathrm{Re}, \mathrm{Pr})`; empty when `a`
+/// states no relation.
+inline std::string latex_relation(const analysis& a) {
+  if (relation(a, text_form::ascii).empty()) return {};
+  std::string s = latex_written(a.groups.front()) + " = f(";
+  for (std::size_t k = 1; k < a.groups.size(); ++k) s += (k > 1 ? ", " : "") + latex_written(a.groups[k]);
+  return s + ")";
+}
+
+}  // namespace detail
+
 NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_options& o) {
   std::string s;
   if (!o.title.empty()) s += "% " + detail::one_line(o.title) + "\n";
@@ -222,6 +244,10 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
         s += ", \\quad u(\\Pi_{" + std::to_string(k + 1) + "}) = " + detail::latex_number(r.uncertainty_text);
     }
     s += " \\]";
+    // without a name, the neutral description of the text report ("ratio of two lengths")
+    if (const std::string neutral = detail::neutral_description(a.groups[k], a.variables, text_form::ascii);
+        names.empty() && neutral.size() > 3)
+      s += "  % " + detail::one_line(neutral.substr(2, neutral.size() - 3));
     if (!names.empty()) {
       s += "  % " + detail::one_line(names[0].name);
       for (std::size_t m = 1; m < names.size(); ++m)
@@ -230,10 +256,29 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
     }
     s += "\n";
   }
+  // the same relation in named groups, when the catalog writes it differently (as the text report)
+  if (const std::optional<analysis> named = detail::in_named_groups(a);
+      named && !detail::named_relation(a, text_form::ascii).empty())
+    s += "\\[ " + detail::latex_relation(*named) + " \\]  % in named groups\n";
   for (std::size_t k = 0; k < a.isolated.size(); ++k)
     s += "% excluded: " + a.isolated[k] + " (" +
          detail::one_line(k < a.isolated_reasons.size() ? a.isolated_reasons[k] : "") + ")\n";
   for (const auto& note : detail::regime_sentences(a, values)) s += "% note: " + detail::one_line(note) + "\n";
+  if (o.alternatives) {
+    if (o.alternatives->empty()) return s + "% alternatives: none (no other admissible repeating variables)\n";
+    s += "% alternatives (other admissible repeating variables, best first by the rule)\n";
+    for (std::size_t i = 0; i < o.alternatives->size(); ++i) {
+      const analysis& x = (*o.alternatives)[i];
+      s += "% " + std::to_string(i + 1) + ". repeating " + detail::comma_list(x.repeating) + "\n\\[ ";
+      for (std::size_t k = 0; k < x.groups.size(); ++k) {
+        s += (k > 0 ? ", \\quad " : "") + std::string("\\Pi_{") + std::to_string(k + 1) + "} = " + latex(x.groups[k]);
+        if (!x.groups[k].matches.empty())
+          s += " = " + detail::latex_power(detail::latex_symbol(x.groups[k].matches.front().symbol),
+                                           x.groups[k].matches.front().power);
+      }
+      s += " \\]\n";
+    }
+  }
   return s;
 }
 

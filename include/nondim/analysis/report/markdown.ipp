@@ -9,6 +9,7 @@
 #include "../../analysis.hpp"
 #include "../../solver/core/detail/cat.hpp"
 #include "../extraction/explain.hpp"
+#include "detail/named_relation.hpp"
 #include "detail/names.hpp"
 #include "detail/table.hpp"
 #include "detail/values.hpp"
@@ -101,6 +102,11 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
     for (const auto& m : a.groups[k].matches)
       names +=
           detail::cat(names.empty() ? "" : "; ", m.symbol, detail::exponent_suffix(m.power, form), " (", m.name, ")");
+    // without a name, the neutral description of the text report ("ratio of two lengths")
+    if (names.empty()) {
+      const std::string neutral = detail::neutral_description(a.groups[k], a.variables, form);
+      if (neutral.size() > 3) names = neutral.substr(2, neutral.size() - 3);  // " (...)"
+    }
     std::vector<std::string> row{"\u03a0" + std::to_string(k + 1), detail::markdown_escape(a.groups[k].text(form)),
                                  names.empty() ? "–" : detail::markdown_escape(names)};
     const rounded_value r = values[k] ? round_for_report(values[k]->value, values[k]->uncertainty) : rounded_value{};
@@ -109,6 +115,9 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
     s += detail::markdown_row(row);
   }
   s += "\n";
+  // the same relation in named groups, when the catalog writes it differently (as the text report)
+  if (const std::string line = detail::named_relation(a, form); !line.empty())
+    s += "**In named groups:** " + detail::markdown_escape(line) + "\n\n";
 
   if (a.isolated.empty()) {
     s += "**Excluded:** none.\n\n";
@@ -124,6 +133,21 @@ NONDIM_ANALYSIS_INLINE std::string markdown_report(const analysis& a, const repo
     if (note != a.deficiency.explanation) s += "\n> **Note:** " + detail::markdown_escape(note) + "\n";
   for (const auto& note : detail::regime_sentences(a, values, form))
     s += "\n> **Note:** " + detail::markdown_escape(note) + "\n";
+  if (o.alternatives) {
+    if (o.alternatives->empty()) {
+      s += "\n**Alternatives:** none (no other admissible repeating variables).\n";
+      return s;
+    }
+    s += "\n**Alternatives** (other admissible repeating variables, best first by the rule):\n\n";
+    for (std::size_t i = 0; i < o.alternatives->size(); ++i) {
+      const analysis& x = (*o.alternatives)[i];
+      s += std::to_string(i + 1) + ". repeating " + detail::markdown_escape(detail::comma_list(x.repeating, form)) +
+           "\n";
+      for (std::size_t k = 0; k < x.groups.size(); ++k)
+        s += "   - \u03a0" + std::to_string(k + 1) + " = " +
+             detail::markdown_escape(x.groups[k].text(form) + detail::names_suffix(x.groups[k], form)) + "\n";
+    }
+  }
   return s;
 }
 

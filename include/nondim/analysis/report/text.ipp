@@ -9,6 +9,7 @@
 #include "../extraction/explain.hpp"
 #include "../extraction/text.hpp"
 #include "../names/naming.hpp"
+#include "detail/named_relation.hpp"
 #include "detail/names.hpp"
 #include "detail/rotation.hpp"
 #include "detail/table.hpp"
@@ -60,16 +61,8 @@ NONDIM_ANALYSIS_INLINE std::string text_report(const analysis& a, const report_o
       s += "  " + std::string(label.size() - (uni ? 1 : 0), ' ') + "   " + detail::value_sentence(*values[k]) + "\n";
   }
 
-  if (a.form == basis::classical) {
-    // the same relation in named groups, when the catalog writes it differently
-    analysis named = a;
-    const std::vector<std::size_t> chosen = detail::rename_in_catalog_groups(named);
-    if (named.form == basis::named) {
-      detail::attach_matches(named, chosen);
-      const std::string line = relation(named, form);
-      if (!line.empty() && line != relation(a, form)) s += "in named groups: " + line + "\n";
-    }
-  }
+  // the same relation in named groups, when the catalog writes it differently
+  if (const std::string line = detail::named_relation(a, form); !line.empty()) s += "in named groups: " + line + "\n";
 
   if (a.isolated.empty()) {
     s += "excluded: none\n";

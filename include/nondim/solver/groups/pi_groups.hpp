@@ -14,6 +14,10 @@
 ///    base dimensions and smaller sum of |exponents|, surface tension, viscosity, expansion
 ///    coefficients and pure numbers last; input order breaks ties; each one that raises the
 ///    rank is taken; only if the rank is still short is the dependent variable taken too;
+///  - variables have no names or kinds here, only dimensions: among variables of one
+///    dimension the first given repeats. `analyze()` prefers the one a textbook repeats (a
+///    diameter over a bed length, C_min over UA; repeating_rule.hpp), so the two agree when
+///    that one is given first: pass the particle diameter before the bed length;
 ///  - group k holds exactly one non-repeating variable, with a positive exponent, times
 ///    powers of the repeating ones; exponents are primitive integers (gcd 1); groups are
 ///    ordered by the input position of their non-repeating variable;

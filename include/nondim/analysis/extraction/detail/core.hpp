@@ -66,12 +66,15 @@ std::string product_text(const std::vector<std::string>& names, const std::vecto
 /// \param names     their names
 /// \param given     the given repeating variables (input indices), empty for the automatic choice
 /// \param dependent the index of the dependent variable
+/// \param preference for the automatic choice, which variable of a dimension a textbook
+///        repeats (`repeating_preference_of`), one per variable or empty
 /// \throws analysis_error when the given repeating variables are not `rank` independent ones,
 ///         or when a result does not fit in 64 bits (multiprecision field only);
 ///         rational_overflow (int64 field) when an intermediate does not fit.
 template <class F>
 exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<std::string>& names,
-                         const std::vector<std::size_t>& given, std::size_t dependent) {
+                         const std::vector<std::size_t>& given, std::size_t dependent,
+                         const std::vector<repeating_preference>& preference) {
   const std::size_t n = dims.size();
   exact_outcome out;
   out.multiprecision = !std::is_same_v<F, rational>;
@@ -87,7 +90,7 @@ exact_outcome exact_core(const std::vector<dimension>& dims, const std::vector<s
     for (std::size_t j = 0; j < n; ++j)
       if (std::find(given.begin(), given.end(), j) == given.end()) order.push_back(j);
   } else {
-    order = repeating_candidate_order(dims, dependent);
+    order = repeating_candidate_order(dims, dependent, preference);
     order.push_back(dependent);
   }
 
