@@ -3,7 +3,7 @@
 # SECONDS on a copy of its seed corpus. Exits non-zero on any finding (crash, sanitizer
 # report, undocumented exception, leak, timeout) or build failure.
 #
-# Usage: tests/fuzz/run_fuzzers.sh [--merge] [--keep-findings] [--nice N] [--target NAME]... SECONDS [BUILD_DIR]
+# Usage: tests/fuzz/run_fuzzers.sh [--merge] [--keep-findings] [--nice N] [--timeout S] [--target NAME]... SECONDS [BUILD_DIR]
 #   --merge          merge the run's new coverage into tests/fuzz/corpus/NAME (libFuzzer
 #                    -merge=1: only inputs that add coverage are added, existing seeds kept)
 #   --keep-findings  copy every failing input into tests/fuzz/corpus/NAME as finding-<sha1>,
@@ -12,6 +12,9 @@
 #   --target NAME    run only NAME (e.g. analyze_fuzz); may be repeated
 #   --nice N         run the fuzzers (and their merges) at niceness N, on a machine shared
 #                    with builds; configuring and building keep the caller's priority
+#   --timeout S      an input running longer than S seconds is a finding (default 10). The
+#                    clock is the wall's: a fuzzer at niceness 19 beside builds can wait longer
+#                    than that for the CPU, so give such a run a larger S (300)
 # CI runs 60 s per target; before a release, `--merge --keep-findings 600` (DEVELOPERS.md).
 # The last line per target gives its executions and features, and the CPU seconds the fuzzer
 # had in its SECONDS of wall-clock time (on a loaded machine, far fewer); a summary ends the run.
@@ -19,6 +22,7 @@ set -euo pipefail
 merge=0
 keep=0
 nice_level=""
+timeout=10
 targets=()
 while [ $# -gt 0 ]; do
   case "$1" in
@@ -26,11 +30,12 @@ while [ $# -gt 0 ]; do
     --keep-findings) keep=1; shift ;;
     --target) targets+=("$2"); shift 2 ;;
     --nice) nice_level="$2"; shift 2 ;;
-    -h|--help) sed -n '2,19p' "$0"; exit 0 ;;
+    --timeout) timeout="$2"; shift 2 ;;
+    -h|--help) sed -n '2,22p' "$0"; exit 0 ;;
     *) break ;;
   esac
 done
-seconds=${1:?usage: run_fuzzers.sh [--merge] [--keep-findings] [--nice N] [--target NAME]... SECONDS [BUILD_DIR]}
+seconds=${1:?usage: run_fuzzers.sh [--merge] [--keep-findings] [--nice N] [--timeout S] [--target NAME]... SECONDS [BUILD_DIR]}
 here=$(cd "$(dirname "$0")" && pwd)
 root=$(cd "$here/../.." && pwd)
 build=${2:-$root/build/fuzz}
@@ -59,7 +64,7 @@ for name in "${targets[@]}"; do
   mkdir -p "$work/corpus" "$work/artifacts"
   if [ -d "$seeds" ]; then cp -r "$seeds/." "$work/corpus/"; fi
   echo "== $name: ${seconds} s"
-  if ! "${timed[@]}" ${timed:+-o "$work/cpu"} "${run[@]}" "$fuzzer" "$work/corpus" -max_total_time="$seconds" -max_len=512 -timeout=10 \
+  if ! "${timed[@]}" ${timed:+-o "$work/cpu"} "${run[@]}" "$fuzzer" "$work/corpus" -max_total_time="$seconds" -max_len=512 -timeout="$timeout" \
        -rss_limit_mb=2048 -print_final_stats=1 -artifact_prefix="$work/artifacts/" 2>"$work/log"; then
     tail -n 60 "$work/log"
     echo "!! $name found a fault; inputs kept in $work/artifacts" >&2
@@ -88,7 +93,7 @@ for name in "${targets[@]}"; do
     before=$(ls "$seeds" | wc -l)
     # -merge=1: inputs of the run's corpus that add coverage to the seeds, minimised;
     # -use_counters=0 counts edges only, not how often each runs (else hundreds of inputs)
-    "${run[@]}" "$fuzzer" -merge=1 -use_counters=0 -max_len=512 -timeout=10 -rss_limit_mb=2048 "$seeds" "$work/corpus" \
+    "${run[@]}" "$fuzzer" -merge=1 -use_counters=0 -max_len=512 -timeout="$timeout" -rss_limit_mb=2048 "$seeds" "$work/corpus" \
       2>"$work/merge.log" ||
       { tail -n 20 "$work/merge.log"; status=1; }
     echo "   merged: $(( $(ls "$seeds" | wc -l) - before )) new inputs into $seeds"
