@@ -12,7 +12,8 @@
 #   --target NAME    run only NAME (e.g. analyze_fuzz); may be repeated
 #   --nice N         run the fuzzers (and their merges) at niceness N, on a machine shared
 #                    with builds; configuring and building keep the caller's priority
-#   --timeout S      an input running longer than S seconds is a finding (default 10). The
+#   --timeout S      an input running longer than S seconds is a finding (a timeout, or a
+#                    slow unit past libFuzzer's report; default 10). The
 #                    clock is the wall's: a fuzzer at niceness 19 beside builds can wait longer
 #                    than that for the CPU, so give such a run a larger S (300)
 # CI runs 60 s per target; before a release, `--merge --keep-findings 600` (DEVELOPERS.md).
@@ -31,7 +32,7 @@ while [ $# -gt 0 ]; do
     --target) targets+=("$2"); shift 2 ;;
     --nice) nice_level="$2"; shift 2 ;;
     --timeout) timeout="$2"; shift 2 ;;
-    -h|--help) sed -n '2,22p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,23p' "$0"; exit 0 ;;
     *) break ;;
   esac
 done
@@ -64,7 +65,7 @@ for name in "${targets[@]}"; do
   mkdir -p "$work/corpus" "$work/artifacts"
   if [ -d "$seeds" ]; then cp -r "$seeds/." "$work/corpus/"; fi
   echo "== $name: ${seconds} s"
-  if ! "${timed[@]}" ${timed:+-o "$work/cpu"} "${run[@]}" "$fuzzer" "$work/corpus" -max_total_time="$seconds" -max_len=512 -timeout="$timeout" \
+  if ! "${timed[@]}" ${timed:+-o "$work/cpu"} "${run[@]}" "$fuzzer" "$work/corpus" -max_total_time="$seconds" -max_len=512 -timeout="$timeout" -report_slow_units="$timeout" \
        -rss_limit_mb=2048 -print_final_stats=1 -artifact_prefix="$work/artifacts/" 2>"$work/log"; then
     tail -n 60 "$work/log"
     echo "!! $name found a fault; inputs kept in $work/artifacts" >&2
