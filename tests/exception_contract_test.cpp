@@ -18,6 +18,11 @@
 
 #include <nondim/nondim.hpp>
 
+#if defined(NONDIM_TEST_PROBLEM_FILE)  // the program's problem-file reader, when the program is built
+#include "messages.hpp"
+#include "problem_file.hpp"
+#endif
+
 using namespace nondim;
 
 namespace {
@@ -533,4 +538,76 @@ TEST_SUITE("exception contracts") {
       CHECK(storage == std::vector<double>{1.0, 2.0, 3.0});
     }
   }
+#if defined(NONDIM_TEST_PROBLEM_FILE)
+  // The program's reader of problem files (tools/nondim/problem_file.hpp): input_error only,
+  // one message beginning "nondim: ", whatever the text (README: the program exits 2 with
+  // one message on bad input; the schema is DESIGN.md's). TOML syntax: TOML v1.0.0.
+  TEST_CASE("problem-file text: input_error only, for every extreme text, value and size") {
+    const auto variable = [](const std::string& body) { return "[[variable]]\nname = \"x\"\nunit = \"m\"\n" + body; };
+    std::vector<std::string> texts{
+        "",
+        " ",
+        std::string("\0\0\0", 3),
+        "\xff\xfe",
+        "t\xe2\xba\x95",  // U+2E95 after a bare key: a fault of toml++ 3.3's white-space table (issue 18)
+        "title = \"\xe2\xba\x95\"\n" + variable(""),
+        "# \xe2\xba\x95\n" + variable(""),
+        "\xe2\xba\x95 = 1\n" + variable(""),
+        std::string(100000, '['),
+        "a = " + std::string(100000, '[') + std::string(100000, ']'),
+        "a = " + std::string(100000, '{'),
+        "title = 1",
+        "[[variable]]",
+        variable(""),
+        variable("prototype = 9223372036854775807\nmodel = -9223372036854775808"),
+        variable("prototype = 9223372036854775808"),
+        variable("prototype = 0x7fffffffffffffff\nmodel = 0b1"),
+        variable("prototype = 1e309"),
+        variable("prototype = -1e308\nmodel = 5e-324"),
+        variable("prototype = nan\nmodel = inf"),
+        variable("prototype = -inf"),
+        variable("value = \"1e999 m\""),
+        variable("value = \"nan m\"\nuncertainty = \"-inf m\""),
+        variable("value = 1.0\nuncertainty = -1.0"),
+        variable("value = \"" + std::string(5000, '9') + " m\""),
+        variable("prototype = [1, 2]\nmodel = { a = 1 }"),
+        variable("note = 1979-05-27T07:32:00Z"),
+        variable("kind = \"" + std::string(5000, 'k') + "\""),
+        "[[variable]]\nname = \"" + std::string(5000, 'x') + "\"\nunit = \"" + std::string(5000, 'm') + "\"\n",
+        "[[variable]]\nname = \"a\\u0000b\"\nunit = \"m\"\n",
+        "[[variable]]\nname = \"x\"\nunit = \"m^9223372036854775807*m\"\n",
+        "[[variable]]\nname = \"x\"\nunit = \"" + std::string(max_unit_nesting + 1, '(') + "m" +
+            std::string(max_unit_nesting + 1, ')') + "\"\n",
+        "dependent = \"\"\nrepeating = []\n" + variable(""),
+        "dependent = \"y\"\nrepeating = [\"x\", \"x\", 1]\n" + variable(""),
+        "# " + std::string(nondim::tool::max_problem_file_bytes, 'c') + "\n" + variable(""),
+    };
+    std::string many;  // one variable past the limit of a problem
+    for (std::size_t i = 0; i <= max_problem_variables; ++i)
+      many += "[[variable]]\nname = \"v" + std::to_string(i) + "\"\nunit = \"m\"\n";
+    texts.push_back(many);
+    for (const std::string& text : texts) {
+      const std::string where = "parse_problem_text of " + std::to_string(text.size()) + " bytes";
+      try {
+        (void)nondim::tool::parse_problem_text(text, "extreme.toml");
+      } catch (const nondim::tool::input_error& e) {
+        CHECK_MESSAGE(std::string(e.what()).rfind("nondim: ", 0) == 0, where, ": ", std::string(e.what()));
+      } catch (const std::exception& e) {
+        FAIL_CHECK(where, ": undocumented ", std::string(typeid(e).name()), " escaped: ", std::string(e.what()));
+      }
+    }
+    // a problem past the variable limit is read; the analysis refuses its last variable
+    // (problem::add: analysis_error naming it), as `nondim groups --file` does
+    const nondim::tool::problem_file f = nondim::tool::parse_problem_text(many, "many.toml");
+    REQUIRE(f.variables.size() == max_problem_variables + 1);
+    problem p;
+    CHECK(expect_only<analysis_error>("problem::add from a file", [&] {
+            for (const auto& v : f.variables) p.add(v.name, v.unit);
+          }) == outcome::threw_documented);
+    CHECK(p.size() == max_problem_variables);
+    // files: none, a directory, a device that never ends (read no further than the 1 MiB limit)
+    for (const std::string path : {"", "/nonexistent/problem.toml", "/", "/dev/zero"})
+      CHECK_THROWS_AS((void)nondim::tool::load_problem_file(path), nondim::tool::input_error);
+  }
+#endif
 }
