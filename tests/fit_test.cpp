@@ -110,6 +110,32 @@ TEST_SUITE("fit") {
     CHECK(r.within_20 == 1.0);
     CHECK(r.predict(std::vector<double>{1e4, 1.0}) == doctest::Approx(0.023 * std::pow(1e4, 0.8)).epsilon(0.05));
   }
+  TEST_CASE("cylinder data from Hilpert's correlation give back C and m with the Prandtl exponent held") {
+    // Hilpert's correlation for a cylinder in crossflow, Nu = C Re^m Pr^(1/3), with
+    // C = 0.193 and m = 0.618 for 4000 <= Re <= 40000 (Incropera et al., Fundamentals of
+    // Heat and Mass Transfer, 6th ed., eq. 7.52 and Table 7.2, from memory); a 4 % scatter
+    std::mt19937 random(23);
+    std::uniform_real_distribution<double> ln_re(std::log(4000.0), std::log(40000.0));
+    std::uniform_real_distribution<double> ln_pr(std::log(0.7), std::log(7.0));
+    std::normal_distribution<double> noise(0.0, 0.04);
+    rig_data d;
+    for (int i = 0; i < 40; ++i) {
+      d.re.push_back(std::exp(ln_re(random)));
+      d.pr.push_back(std::exp(ln_pr(random)));
+      d.nu.push_back(0.193 * std::pow(d.re.back(), 0.618) * std::cbrt(d.pr.back()) * std::exp(noise(random)));
+    }
+    fit_input in = input_of(d);
+    in.fixed = {std::nullopt, 1.0 / 3.0};  // the Prandtl exponent as the correlation gives it
+    const fit_result r = fit_power_law(in);
+    REQUIRE(r.terms.size() == 2);
+    CHECK(r.dof == 38);  // 40 rows, two parameters fitted (C and m)
+    CHECK(r.terms[1].fixed);
+    CHECK(r.terms[1].exponent.value == doctest::Approx(1.0 / 3.0));
+    CHECK(r.terms[0].exponent.low < 0.618);
+    CHECK(r.terms[0].exponent.high > 0.618);
+    CHECK(r.coefficient.low < 0.193);
+    CHECK(r.coefficient.high > 0.193);
+  }
   TEST_CASE("exact data give the exponents to rounding and a zero scatter") {
     const rig_data d = dittus_boelter(10, 0.0, 3);
     const fit_result r = fit_power_law(input_of(d));
