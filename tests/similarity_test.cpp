@@ -803,9 +803,10 @@ TEST_SUITE("similarity errors") {
   // names the group with the magnitude 2^63 = 9223372036854775808.
   TEST_CASE("an exponent of -2^63 is refused with the group written out, not negated") {
     similarity_problem p;
-    p.add(make_similarity_variable("x", "m", 1.0)).add(make_similarity_variable("y", "m", 2.0));
-    p.dependent = "y";
-    p.add_group({std::numeric_limits<std::int64_t>::min(), 1});
+    p.add(make_similarity_variable("F", "N")).add(make_similarity_variable("x", "m", 1.0));
+    p.add(make_similarity_variable("y", "m", 2.0));
+    p.dependent = "F";
+    p.add_group({0, std::numeric_limits<std::int64_t>::min(), 1});
     try {
       (void)plan_similarity(p);
       FAIL("plan_similarity accepted an exponent beyond 2^53");
