@@ -6,8 +6,11 @@
 
 #include <doctest/doctest.h>
 
+#include <array>
 #include <cmath>
 #include <cstddef>
+#include <cstdint>
+#include <limits>
 #include <random>
 #include <string>
 #include <vector>
@@ -349,4 +352,23 @@ TEST_SUITE("runtime_scales") {
     // a difference given in a unit of another dimension
     CHECK_THROWS_AS((void)s.nondimensional_difference(30.0, 20.0, "m"), dimension_error);
   }
+}
+
+// Found by runtime_scales_fuzz (tests/fuzz/corpus/runtime_scales/rational_negation_of_scale):
+// the scale of M^(-2^63) negated its exponent, -(-2^63), which has no int64 (ISO/IEC 14882
+// [basic.fundamental]) and escaped as rational_overflow from scale(). Its value is
+// 1 / m_ref^(2^63): 3^(2^63) overflows to +inf and 1/inf is +0 (IEEE 754).
+TEST_CASE("runtime_scales: an exponent of -2^63 gives a scale and its text, not an overflow") {
+  runtime_scales s;
+  s.add("L_ref", dims::length, 2.0).add("m_ref", dims::mass, 3.0);
+  std::array<rational, base_dimension_count> e{};
+  e[1] = rational{std::numeric_limits<std::int64_t>::min()};
+  const dimension d{e};
+  REQUIRE(s.spans(d));
+  const scale_expression x = s.scale(d);
+  CHECK(x.exponents[1] == rational{std::numeric_limits<std::int64_t>::min()});
+  CHECK(x.value == 0.0);
+  CHECK(x.text(text_form::ascii) == "1/m_ref^9223372036854775808");
+  CHECK(x.nondimensional_text("q", text_form::ascii) == "q*m_ref^9223372036854775808");
+  CHECK(!x.text(text_form::unicode).empty());
 }

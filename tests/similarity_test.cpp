@@ -878,4 +878,24 @@ TEST_SUITE("similarity errors") {
     static_assert(std::is_base_of_v<std::invalid_argument, similarity_error>);
     CHECK_THROWS_AS(plan_similarity(similarity_problem{}), std::invalid_argument);
   }
+
+  // Found by similarity_fuzz (tests/fuzz/corpus/similarity/exponent_min_int64): a group with
+  // an exponent of -2^63 was written out for the message that refuses it by negating the
+  // exponent, which has no int64 (ISO/IEC 14882 [basic.fundamental]; UBSan). The message
+  // names the group with the magnitude 2^63 = 9223372036854775808.
+  TEST_CASE("an exponent of -2^63 is refused with the group written out, not negated") {
+    similarity_problem p;
+    p.add(make_similarity_variable("F", "N")).add(make_similarity_variable("x", "m", 1.0));
+    p.add(make_similarity_variable("y", "m", 2.0));
+    p.dependent = "F";
+    p.add_group({0, std::numeric_limits<std::int64_t>::min(), 1});
+    try {
+      (void)plan_similarity(p);
+      FAIL("plan_similarity accepted an exponent beyond 2^53");
+    } catch (const similarity_error& e) {
+      CHECK(std::string(e.what()).find("y/x^9223372036854775808") != std::string::npos);
+      CHECK(e.variable() == "x");
+      CHECK(e.group() == std::optional<std::size_t>{0});
+    }
+  }
 }

@@ -120,11 +120,15 @@ inline std::string factor_list(const std::vector<std::string>& names, const std:
                                text_form form) {
   std::string s;
   for (std::size_t i = 0; i < names.size() && i < e.size(); ++i) {
-    const rational k = sign > 0 ? e[i] : -e[i];
-    if (k.num <= 0) continue;
+    const rational& k = e[i];
+    if (sign > 0 ? k.num <= 0 : k.num >= 0) continue;
     if (!s.empty()) s += form == text_form::unicode ? "\u00b7" : "*";
     s += display_name(names[i], form);
-    s += exponent_suffix(k, form);
+    // |k| without negating k: -2^63 has no int64 negation (its magnitude is written in ASCII)
+    if (k.num == std::numeric_limits<std::int64_t>::min())
+      s += magnitude_suffix(k);
+    else
+      s += exponent_suffix(sign > 0 ? k : -k, form);
   }
   return s;
 }
@@ -575,7 +579,7 @@ class runtime_scales {
         up = up * power(i, k[i]);
         any_positive = true;
       } else if (k[i].num < 0) {
-        down = down * power(i, -k[i]);
+        down = down * power(i, k[i]);  // power() takes |k| in uint64: -k overflows for -2^63
         any_negative = true;
       }
     }
@@ -584,7 +588,7 @@ class runtime_scales {
     return up / down;
   }
 
-  /// Reference i to the power p/q > 0.
+  /// Reference i to the power |p|/q (the sign of p is the caller's).
   [[nodiscard]] double power(std::size_t i, const rational& e) const {
     const std::uint64_t p = detail::exponent_magnitude(e.num);
     if (e.den == 1) return detail::unrolled_power_rt(refs_[i].value, p);

@@ -50,7 +50,11 @@ inline std::string group_text(const std::vector<std::string>& names, const std::
     if (e == 0) continue;
     std::string& side = e > 0 ? top : bottom;
     if (!side.empty()) side.push_back('*');
-    append_power(side, names[j], rational{e > 0 ? e : -e});
+    // the magnitude in unsigned arithmetic: -2^63 has no int64 negation (a group that
+    // plan_similarity refuses is still written out in the message that refuses it)
+    const std::uint64_t m = e > 0 ? static_cast<std::uint64_t>(e) : 0 - static_cast<std::uint64_t>(e);
+    side += names[j];
+    if (m != 1) side += "^" + std::to_string(m);
     if (e < 0) ++below;
   }
   if (top.empty()) top.push_back('1');  // not `= "1"`: a false GCC 12 -Wrestrict at -O3
