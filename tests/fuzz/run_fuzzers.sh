@@ -16,7 +16,7 @@
 #                    slow unit past libFuzzer's report; default 10). The
 #                    clock is the wall's: a fuzzer at niceness 19 beside builds can wait longer
 #                    than that for the CPU, so give such a run a larger S (300)
-# CI runs 60 s per target; before a release, `--merge --keep-findings 600` (DEVELOPERS.md).
+# CI runs 30 s per target; before a release, `--merge --keep-findings 600` (DEVELOPERS.md).
 # The last line per target gives its executions and features, and the CPU seconds the fuzzer
 # had in its SECONDS of wall-clock time (on a loaded machine, far fewer); a summary ends the run.
 set -euo pipefail
