@@ -30,24 +30,7 @@ namespace {
 using big = boost::multiprecision::cpp_rational;
 using nondim_fuzz::require;
 
-class reader {
- public:
-  reader(const std::uint8_t* data, std::size_t size) : data_(data), size_(size) {}
-  std::uint8_t byte() { return pos_ < size_ ? data_[pos_++] : 0; }
-  std::int64_t int64() {
-    std::uint64_t u = 0;
-    for (int i = 0; i < 8; ++i) u = (u << 8U) | byte();
-    std::int64_t s = 0;
-    std::memcpy(&s, &u, sizeof s);
-    return s;
-  }
-  [[nodiscard]] bool done() const { return pos_ >= size_; }
-
- private:
-  const std::uint8_t* data_;
-  std::size_t size_;
-  std::size_t pos_ = 0;
-};
+using reader = nondim_fuzz::byte_reader;
 
 // Mostly small integers (the physics), then small fractions, then values up to int64.
 nondim::rational next_exponent(reader& r) {

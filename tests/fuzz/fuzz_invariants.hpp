@@ -7,12 +7,45 @@
 #include <cfloat>
 #include <cmath>
 #include <cstddef>
+#include <cstdint>
 #include <cstdio>
+#include <cstring>
 #include <exception>
+#include <string>
 #include <string_view>
 #include <typeinfo>
 
 namespace nondim_fuzz {
+
+/// The fuzzer's bytes read in order; past the end every byte reads as 0.
+class byte_reader {
+ public:
+  byte_reader(const std::uint8_t* data, std::size_t size) : data_(data), size_(size) {}
+  std::uint8_t byte() { return pos_ < size_ ? data_[pos_++] : 0; }
+  std::uint64_t bits64() {
+    std::uint64_t u = 0;
+    for (int i = 0; i < 8; ++i) u = (u << 8U) | byte();
+    return u;
+  }
+  std::int64_t int64() {
+    const std::uint64_t u = bits64();
+    std::int64_t s = 0;
+    std::memcpy(&s, &u, sizeof s);
+    return s;
+  }
+  /// Up to n bytes, fewer at the end of the input.
+  std::string text(std::size_t n) {
+    std::string s;
+    while (s.size() < n && pos_ < size_) s += static_cast<char>(data_[pos_++]);
+    return s;
+  }
+  [[nodiscard]] bool done() const { return pos_ >= size_; }
+
+ private:
+  const std::uint8_t* data_;
+  std::size_t size_;
+  std::size_t pos_ = 0;
+};
 
 inline void require(bool ok) {
   if (!ok) __builtin_trap();

@@ -32,32 +32,7 @@ bool has_prefix(const char* what) {
   return std::string_view(what).rfind("nondim: ", 0) == 0;
 }
 
-class reader {
- public:
-  reader(const std::uint8_t* data, std::size_t size) : data_(data), size_(size) {}
-  std::uint8_t byte() { return pos_ < size_ ? data_[pos_++] : 0; }
-  std::uint64_t bits64() {
-    std::uint64_t u = 0;
-    for (int i = 0; i < 8; ++i) u = (u << 8U) | byte();
-    return u;
-  }
-  std::int64_t int64() {
-    const std::uint64_t u = bits64();
-    std::int64_t s = 0;
-    std::memcpy(&s, &u, sizeof s);
-    return s;
-  }
-  std::string text(std::size_t n) {
-    std::string s;
-    while (s.size() < n && pos_ < size_) s += static_cast<char>(data_[pos_++]);
-    return s;
-  }
-
- private:
-  const std::uint8_t* data_;
-  std::size_t size_;
-  std::size_t pos_ = 0;
-};
+using reader = nondim_fuzz::byte_reader;
 
 /// Mostly ordinary positive values, then the specials and extremes, then any bit pattern.
 double next_value(reader& r) {
