@@ -12,12 +12,14 @@ When the ratio is above 1.3, or with --profile, it prints the largest phases of 
 (GCC) or -ftime-trace totals (Clang) for the quantity unit.
 
   bench/compile_cost.py [--runs 5] [--expressions 300] [--compilers g++,clang++] [--keep DIR] [--profile]
-                        [--instructions] [--include DIR]
+                        [--instructions] [--include DIR] [--floor]
 
 --instructions: instead of timing, count the instructions the compiler executes (valgrind
 --tool=callgrind, children traced: driver, cc1plus / clang -cc1, assembler), once per unit.
 Deterministic, so the figure to compare on a loaded machine; ~1 min per unit under valgrind.
 --include DIR: the nondim headers to use (an A/B against another tree); default include/.
+--floor: also compile the expressions on bench/typed_floor.hpp, the least a typed quantity with the
+same syntax can be: its ratio against double bounds what nondim can reach.
 
 Installs nothing; uses only the compilers found on PATH.
 """
