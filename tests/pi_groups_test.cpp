@@ -173,6 +173,24 @@ static_assert(exponents_of<textbook::transient_conduction>() ==
 static_assert(exponents_of<textbook::mass_transfer>() ==
               groups<5, 3>{{{1, 0, 0, -1, 0}, {0, 1, -1, -1, 0}, {0, 0, -1, -1, 1}}});
 
+// Packed bed (Bird, Stewart & Lightfoot, 2nd ed., 6.4, the Ergun equation, from memory):
+// dp/(rho U^2), L/d_p and mu/(rho U d_p) = 1/Re_p, whose product dp d_p/(rho U^2 L) is the
+// books' friction factor; the void fraction eps is its own group. d_p, listed first of the
+// two lengths, repeats with U and rho.
+static_assert(exponents_of<textbook::packed_bed>() ==
+              groups<7, 4>{
+                  {{1, 0, 0, -2, -1, 0, 0}, {0, -1, 1, 0, 0, 0, 0}, {0, -1, 0, -1, -1, 1, 0}, {0, 0, 0, 0, 0, 0, 1}}});
+static_assert(repeating_are<textbook::packed_bed>(std::array<std::size_t, 3>{1, 3, 4}));
+
+// Heat exchanger (Bergman et al., 7th ed., 11.4, from memory): the effectiveness
+// q/(C_min dT_max), NTU = UA/C_min and C_max/C_min = 1/C_r. W and W/K carry L, M and T only
+// as L^2 M T^-3, so four base dimensions give rank 2; dT_max (one base dimension) is taken
+// before C_min.
+static_assert(exponents_of<textbook::heat_exchanger>() ==
+              groups<5, 3>{{{1, -1, 0, 0, -1}, {0, -1, 1, 0, 0}, {0, -1, 0, 1, 0}}});
+static_assert(repeating_are<textbook::heat_exchanger>(std::array<std::size_t, 2>{4, 1}));
+static_assert(basis_of<textbook::heat_exchanger>().rank == 2);
+
 // Pendulum (Halliday, Resnick & Walker, ch. 15, from memory): t^2 g/L; the mass can be in no
 // group and is excluded (isolated), though it is chosen as a repeating variable.
 static_assert(exponents_of<textbook::pendulum>() == groups<4, 1>{{{2, 0, -1, 1}}});

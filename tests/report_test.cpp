@@ -167,6 +167,35 @@ TEST_SUITE("report") {
     CHECK(j["svd_check"]["max_residual"] == 0.0);
   }
 
+  TEST_CASE("the JSON view names the configuration chosen, and has no such key without one") {
+    // regime_configurations' key, as a problem file spells it (README, "Values at a design point")
+    problem p;
+    p.add("F", "N").add("rho", "kg/m^3").add("U", "m/s").add("D", "m").add("mu", "Pa*s");
+    options o;
+    o.configuration = "sphere";
+    const auto j = nlohmann::json::parse(json_report(analyze(p, o)));
+    CHECK(j["configuration"] == "sphere");
+    CHECK_FALSE(nlohmann::json::parse(json_report(analyze(p))).contains("configuration"));
+    CHECK(nlohmann::json::parse(json_scales_report(analyze(p, o)))["configuration"] == "sphere");
+  }
+
+  TEST_CASE("LaTeX and Markdown explain a rank below the count of base dimensions, as the text does") {
+    // A heat exchanger's q (W), UA and C_min (W/K) and dT_max (K): L, M and T appear only as
+    // L^2 M T^-3, so rank 2 of four base dimensions (Bergman et al., Fundamentals of Heat and
+    // Mass Transfer, 7th ed., 11.4, from memory; W = kg m^2 s^-3, SI Brochure, table 4)
+    problem p;
+    p.add("q", "W").add("UA", "W/K").add("C_min", "W/K").add("dT_max", "K");
+    const analysis a = analyze(p);
+    REQUIRE(a.deficiency.deficient);
+    const std::string tex = latex_report(a);
+    // a comment line of its own, after the header: invisible in the typeset equations
+    CHECK(contains(tex, "\n% rank 2 is less than the 4 base dimensions that appear (L, M, T and Theta): "));
+    CHECK(contains(tex, "L, M and T appear only in the fixed combination L^2*M*T^-3\n\\[ \\Pi_{1}"));
+    CHECK(contains(markdown_report(a), "\n\nrank 2 is less than the 4 base dimensions"));
+    CHECK(contains(text_report(a), "  rank 2 is less than the 4 base dimensions"));
+    CHECK_FALSE(contains(latex_report(drag()), "is less than"));
+  }
+
   TEST_CASE("the JSON view gives the title, the isolated variables with reasons and the alternatives") {
     // the pendulum with its mass (Fox and McDonald, 8th ed., 7.2): m is in no group because
     // no other variable has M; the other admissible repeating set of t, L, m, g with t

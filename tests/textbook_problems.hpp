@@ -190,6 +190,34 @@ inline constexpr problem<5> mass_transfer{
       {"U", dims::velocity},
       {"nu", dims::kinematic_viscosity}}}};
 
+// The particle diameter is listed before the bed length: the books repeat d_p, and pi_basis,
+// which sees dimensions only, takes the first of two lengths (analyze() takes d_p by its name).
+inline constexpr problem<7> packed_bed{
+    "pressure drop through a packed bed",
+    "Bird, Stewart & Lightfoot, Transport Phenomena, 2nd ed., sec. 6.4 (the Ergun equation: "
+    "dp d_p / (rho U^2 L) = f(Re_p, eps), Re_p = rho U d_p / mu; from memory)",
+    {{{"dp", dims::pressure},
+      {"d_p", dims::length},
+      {"L", dims::length},
+      {"U", dims::velocity},
+      {"rho", dims::density},
+      {"mu", dims::dynamic_viscosity},
+      {"eps", dims::dimensionless}}}};
+
+/// Thermal conductance, W/K: an overall conductance UA and a heat-capacity rate m c_p.
+inline constexpr dimension thermal_conductance = dims::power / dims::temperature;
+
+// C_min is listed before UA and C_max for the same reason: the books divide by C_min.
+inline constexpr problem<5> heat_exchanger{
+    "heat transfer rate of a heat exchanger (L, M, T only in W/K and W: rank 2)",
+    "Bergman, Lavine, Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 7th ed., sec. 11.4 "
+    "(effectiveness-NTU: q / (C_min dT_max) = f(NTU, C_r), NTU = UA / C_min, C_r = C_min / C_max; from memory)",
+    {{{"q", dims::power},
+      {"C_min", thermal_conductance},
+      {"UA", thermal_conductance},
+      {"C_max", thermal_conductance},
+      {"dT_max", dims::temperature}}}};
+
 // ---- mechanics, gravitation, gases, electricity -------------------------------------------
 
 inline constexpr problem<4> pendulum{
@@ -272,6 +300,8 @@ constexpr void for_each_problem(F&& f) {
   f.template operator()<natural_convection>();
   f.template operator()<transient_conduction>();
   f.template operator()<mass_transfer>();
+  f.template operator()<packed_bed>();
+  f.template operator()<heat_exchanger>();
   f.template operator()<pendulum>();
   f.template operator()<spring_mass>();
   f.template operator()<spring_force>();
@@ -289,16 +319,16 @@ constexpr problem_view view(const problem<N>& p) {
 }
 
 /// \brief Every problem, in the order of `for_each_problem` (run-time use).
-inline constexpr std::array<problem_view, 28> all_problems{
-    view(sphere_drag),        view(pipe_pressure_drop), view(ship_resistance),
-    view(vortex_shedding),    view(pump_power),         view(weir_flow),
-    view(orifice_flow),       view(boundary_layer),     view(stokes_settling),
-    view(deep_water_wave),    view(sound_speed),        view(blast_wave),
-    view(capillary_rise),     view(drop_oscillation),   view(drag_without_density),
-    view(forced_convection),  view(natural_convection), view(transient_conduction),
-    view(mass_transfer),      view(pendulum),           view(spring_mass),
-    view(spring_force),       view(kepler_orbit),       view(ideal_gas),
-    view(rc_circuit),         view(wire_resistance),    view(crack_fracture),
-    view(accelerometer_noise)};
+inline constexpr std::array<problem_view, 30> all_problems{
+    view(sphere_drag),       view(pipe_pressure_drop), view(ship_resistance),
+    view(vortex_shedding),   view(pump_power),         view(weir_flow),
+    view(orifice_flow),      view(boundary_layer),     view(stokes_settling),
+    view(deep_water_wave),   view(sound_speed),        view(blast_wave),
+    view(capillary_rise),    view(drop_oscillation),   view(drag_without_density),
+    view(forced_convection), view(natural_convection), view(transient_conduction),
+    view(mass_transfer),     view(packed_bed),         view(heat_exchanger),
+    view(pendulum),          view(spring_mass),        view(spring_force),
+    view(kepler_orbit),      view(ideal_gas),          view(rc_circuit),
+    view(wire_resistance),   view(crack_fracture),     view(accelerometer_noise)};
 
 }  // namespace textbook

@@ -114,7 +114,18 @@ cases.update({
     "regime without source": broken_value(lambda v: v["groups"][1]["regimes"][0].pop("source")),
 })
 
+# the configuration chosen (README: pipe_flow, flat_plate, ...), only one of those keys
+configured = broken(lambda v: v.update(configuration="pipe_flow"))
+cases.update({
+    "unknown configuration": broken(lambda v: v.update(configuration="pipe")),
+    "empty configuration": broken(lambda v: v.update(configuration="")),
+    "configuration as its description": broken(lambda v: v.update(configuration="flow in a circular pipe")),
+})
+
 failures = 0
+if check_schema.check("groups", configured):
+    print("FAIL: the valid object with a configuration is rejected:", check_schema.check("groups", configured))
+    failures += 1
 if check_schema.check("groups", valued):
     print("FAIL: the valid object with values is rejected:", check_schema.check("groups", valued))
     failures += 1
@@ -184,7 +195,11 @@ scale_bad = {
     "negative uncertainty": broken_scale(lambda v: v["dependent"].update(predicted_uncertainty=-7.9)),
     "exact not a boolean": broken_scale(lambda v: v["dependent"].update(exact="yes")),
     "free while exact": broken_scale(lambda v: v.update(free=["U"])),
+    "unknown configuration": broken_scale(lambda v: v.update(configuration="cylinder")),
 }
+if check_schema.check("scale", dict(scale_good, configuration="cylinder_crossflow")):
+    print("FAIL: the valid scale object with a configuration is rejected")
+    failures += 1
 if check_schema.check("scale", scale_good):
     print("FAIL: the valid scale object is rejected:", check_schema.check("scale", scale_good))
     failures += 1
@@ -228,7 +243,11 @@ fit_bad = {
     "outlier not flagged": broken_fit(lambda v: v["outliers"][0].update(studentized=1.2)),
     "outlier beyond the rows": broken_fit(lambda v: v["outliers"][0].update(row=11, line=12)),
     "extra key": broken_fit(lambda v: v.update(extra=1)),
+    "configuration not a key": broken_fit(lambda v: v.update(configuration=3)),
 }
+if check_schema.check("fit", dict(fit_good, configuration="cylinder_crossflow")):
+    print("FAIL: the valid fit object with a configuration is rejected")
+    failures += 1
 if check_schema.check("fit", fit_good):
     print("FAIL: the valid fit object is rejected:", check_schema.check("fit", fit_good))
     failures += 1
@@ -236,6 +255,37 @@ for name, value in fit_bad.items():
     if not check_schema.check("fit", value):
         print("FAIL: not rejected (fit):", name)
         failures += 1
-checked = len(cases) + len(convert_bad) + len(scale_bad) + len(fit_bad) + 7
+
+# exact_rank, the schema's rank check, against python3-sympy's Matrix.rank (an outside
+# reference, imported here once instead of in every case): dimension matrices of 7 rows with
+# small integer and half-integer entries, rank-deficient ones included (fixed seed), and the
+# rank-2 matrix of a heat exchanger's q, UA, C and dT (W, W/K, W/K, K: L, M, T in the fixed
+# combination L^2 M T^-3; Bergman et al., Fundamentals of Heat and Mass Transfer, 7th ed., 11.4).
+import random  # noqa: E402
+from fractions import Fraction  # noqa: E402
+
+import sympy  # noqa: E402
+
+rng = random.Random(20261205)
+matrices = [[[2, 2, 2, 0], [1, 1, 1, 0], [-3, -3, -3, 0], [0, 0, 0, 0], [0, -1, -1, 1], [0, 0, 0, 0], [0, 0, 0, 0]],
+            [[0] * 5 for _ in range(7)]]
+for _ in range(120):
+    cols = rng.randint(1, 9)
+    rows = [[Fraction(rng.randint(-3, 3), rng.choice([1, 1, 1, 2])) for _ in range(cols)] for _ in range(7)]
+    if rng.random() < 0.5:  # a column that repeats a combination of two others
+        for r in rows:
+            r.append(2 * r[0] - r[-1])
+    matrices.append(rows)
+for m in matrices:
+    want = sympy.Matrix([[sympy.Rational(x.numerator, x.denominator) if isinstance(x, Fraction) else x for x in r]
+                         for r in m]).rank()
+    if check_schema.exact_rank(m) != want:
+        print("FAIL: exact_rank %d, sympy %d for %r" % (check_schema.exact_rank(m), want, m))
+        failures += 1
+if check_schema.exact_rank(matrices[0]) != 2:
+    print("FAIL: the heat exchanger's matrix has rank 2")
+    failures += 1
+
+checked = len(cases) + len(convert_bad) + len(scale_bad) + len(fit_bad) + 10 + len(matrices) + 1
 print("%d passed, %d failed" % (checked - failures, failures))
 sys.exit(1 if failures else 0)

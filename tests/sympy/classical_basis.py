@@ -32,6 +32,7 @@ k_cond = d(L=1, M=1, T=-3, Th=-1); cp = d(L=2, T=-2, Th=-1); beta = d(Th=-1)
 G = d(L=3, M=-1, T=-2); volume = d(L=3); amount = d(N=1); R_molar = d(L=2, M=1, T=-2, Th=-1, N=-1)
 ohm = d(L=2, M=1, T=-3, I=-2); farad = d(L=-2, M=-1, T=4, I=2); ohm_m = d(L=3, M=1, T=-3, I=-2)
 area = d(L=2)
+conductance = d(L=2, M=1, T=-3, Th=-1)  # W/K: UA, a heat-capacity rate m c_p
 K_Ic = d(L=Rational(-1, 2), M=1, T=-2)
 noise = d(L=1, T=Rational(-3, 2))
 
@@ -55,6 +56,8 @@ problems = {  # the names of tests/textbook_problems.hpp
     "natural_convection": [h_conv, k_cond, length, accel, beta, temp, density, mu, cp],
     "transient_conduction": [one, time, nu, length, h_conv, k_cond],
     "mass_transfer": [velocity, nu, length, velocity, nu],
+    "packed_bed": [pressure, length, length, velocity, density, mu, one],
+    "heat_exchanger": [power, conductance, conductance, conductance, temp],
     "pendulum": [time, mass, length, accel],
     "spring_mass": [freq, sigma, mass],
     "spring_force": [force, sigma, length],

@@ -125,6 +125,8 @@ nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a,
   put_measured(d, "predicted", dv.prototype, dv.prototype_uncertainty);
   j["dependent"] = d;
   j["notes"] = notes;
+  // the configuration the regime notes keep to, only when one was chosen (as `groups` writes it)
+  if (!a.configuration.empty()) j["configuration"] = a.configuration;
   return j;
 }
 

@@ -126,6 +126,8 @@ std::string fit_json(const fit_report& r) {
   for (const fit_outlier& o : f.outliers)
     outliers.push_back({{"row", o.row + 1}, {"line", r.lines[o.row]}, {"studentized", number(o.studentized)}});
   j["outliers"] = outliers;
+  // the configuration the regime notes keep to, only when one was chosen (as `groups` writes it)
+  if (!a.configuration.empty()) j["configuration"] = a.configuration;
   return j.dump(2) + "\n";
 }
 

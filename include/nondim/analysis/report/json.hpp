@@ -26,7 +26,8 @@ namespace nondim {
 /// "singular_values", "max_residual"}}`, indented, ending in a newline. A group with a value at
 /// the design point of `o` has `value`, `uncertainty` (when every input has one; both rounded
 /// as rounding.hpp says) and `regimes` (when a named number it is has any: `symbol`,
-/// `number`, `regime`, `bounds`, `configuration`, `source`).
+/// `number`, `regime`, `bounds`, `configuration`, `source`). With a configuration chosen
+/// (`options::configuration`), `configuration` at the top level names its key ("pipe_flow").
 std::string json_report(const analysis& a, const report_options& o = {});
 
 }  // namespace nondim

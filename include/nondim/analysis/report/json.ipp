@@ -106,6 +106,8 @@ inline json_members json_report_members(const analysis& a, const report_options&
                                               {"agrees", a.svd.agrees},
                                               {"singular_values", std::move(singular)},
                                               {"max_residual", a.svd.max_residual}}}};
+  // the configuration the regime notes keep to, only when one was chosen (as `alternatives`)
+  if (!a.configuration.empty()) out.emplace_back("configuration", a.configuration);
   if (o.alternatives) {
     json_elements alts;
     for (const analysis& x : *o.alternatives) {

@@ -9,6 +9,7 @@
 #include <string>
 #include <string_view>
 #include "../../analysis.hpp"
+#include "../extraction/explain.hpp"
 #include "detail/named_relation.hpp"
 #include "detail/names.hpp"
 #include "detail/values.hpp"
@@ -230,6 +231,10 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
   s += "% dimensionless groups of " + std::to_string(a.variables.size()) + " variables, rank " +
        std::to_string(a.rank) + "; repeating: " + detail::comma_list(a.repeating) +
        (a.repeating_kept ? "" : " (not used by the named basis)") + "\n";
+  // why the rank falls short of the base dimensions, as the text report says it: a comment,
+  // like the report's other prose, so the equations paste into a document unchanged
+  if (a.deficiency.deficient)
+    s += "% " + detail::one_line(detail::explain_deficiency(a.rank, a.deficiency, text_form::ascii)) + "\n";
   const std::vector<std::optional<group_value>> values = detail::report_values(a, o);
   for (std::size_t k = 0; k < a.groups.size(); ++k) {
     s += "\\[ \\Pi_{" + std::to_string(k + 1) + "} = " + latex(a.groups[k]);
@@ -263,6 +268,8 @@ NONDIM_ANALYSIS_INLINE std::string latex_report(const analysis& a, const report_
   for (std::size_t k = 0; k < a.isolated.size(); ++k)
     s += "% excluded: " + a.isolated[k] + " (" +
          detail::one_line(k < a.isolated_reasons.size() ? a.isolated_reasons[k] : "") + ")\n";
+  for (const auto& note : a.notes)
+    if (note != a.deficiency.explanation) s += "% note: " + detail::one_line(note) + "\n";
   for (const auto& note : detail::regime_sentences(a, values)) s += "% note: " + detail::one_line(note) + "\n";
   if (o.alternatives) {
     if (o.alternatives->empty()) return s + "% alternatives: none (no other admissible repeating variables)\n";
