@@ -2,8 +2,11 @@
 // line decoded from bytes: the arguments are the '\0'-separated pieces (at most 24). The
 // program runs in a scratch directory holding a copy of the program tests' problem files
 // (tests/cli/problems, NONDIM_CLI_PROBLEMS_DIR) so that `--file` and `scale` reach the
-// analysis, the planner and the loader's errors. The exit status must be 0 or 2, never 1 (an
-// internal fault) nor a crash; status 2 comes with one message beginning "nondim: ".
+// analysis, the planner and the loader's errors. `fit --plot` runs /bin/true in place of
+// gnuplot (NONDIM_GNUPLOT), so that the data and the script are written but nothing is drawn;
+// a picture path with a directory in it is not run (it could write outside the scratch
+// directory). The exit status must be 0 or 2, never 1 (an internal fault) nor a crash;
+// status 2 comes with one message beginning "nondim: ".
 #include <unistd.h>
 
 #include <cstddef>
@@ -44,6 +47,8 @@ extern "C" int LLVMFuzzerInitialize(int* argc, char*** argv) {
     std::error_code ec;
     std::filesystem::remove_all(dir, ec);
   });
+  // the plot's data and script are the program's; drawing them is gnuplot's affair
+  if (setenv("NONDIM_GNUPLOT", "/bin/true", 1) != 0) std::abort();
   std::error_code ec;
   std::filesystem::copy(NONDIM_CLI_PROBLEMS_DIR, dir, ec);
   if (ec) {
@@ -71,6 +76,10 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   for (const auto& a : args)
     if (a.find("/dev") != std::string::npos || a.find("/proc") != std::string::npos ||
         a.find("/sys") != std::string::npos)
+      return 0;
+  for (std::size_t i = 0; i < args.size(); ++i)
+    if (args[i].rfind("--plot", 0) == 0 &&
+        (args[i].find('/') != std::string::npos || (i + 1 < args.size() && args[i + 1].find('/') != std::string::npos)))
       return 0;
   std::vector<const char*> argv;
   for (const auto& a : args) argv.push_back(a.c_str());
