@@ -70,7 +70,9 @@ inline std::size_t rank_of(const std::vector<nondim::dimension>& dims) {
 /// The exponents of the product of powers `e` of `dims`, exactly (no overflow possible).
 inline std::vector<big> product_dimension(const std::vector<nondim::dimension>& dims,
                                           const std::vector<std::int64_t>& e) {
-  std::vector<big> s(nondim::base_dimension_count, big(0));
+  // value-initialised (zero), not copies of big(0): GCC 12 at -O2 warns falsely
+  // (-Wmaybe-uninitialized) inside Boost's copy of a temporary cpp_rational
+  std::vector<big> s(nondim::base_dimension_count);
   for (std::size_t j = 0; j < dims.size(); ++j)
     for (std::size_t i = 0; i < nondim::base_dimension_count; ++i) s[i] += to_big(dims[j][i]) * e[j];
   return s;

@@ -167,6 +167,8 @@ problem_input problem_from_arguments(const std::vector<std::string>& args) {
     ++index;
     const std::string where = "argument " + std::to_string(index) + " '" + a + "'";
     const auto eq = a.find('=');
+    if (eq == std::string::npos && a.size() > 5 && a.ends_with(".toml"))  // a problem file given without --file
+      throw input_error(with_prefix(where + " is not NAME=UNIT; to read a problem file, write --file " + a));
     if (eq == std::string::npos)
       throw input_error(
           with_prefix(where + " is not NAME=UNIT (write, for example, rho=kg/m^3; U=1 for a pure number)"));
