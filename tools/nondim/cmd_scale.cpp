@@ -177,7 +177,8 @@ void run_scale(const scale_args& args, std::ostream& out) {
 subcommand add_scale(CLI::App& app) {
   auto args = std::make_shared<scale_args>();
   CLI::App* sub = app.add_subcommand("scale", "Plan a scale-model test from a problem file");
-  sub->add_option("PROBLEM.toml", args->file,
+  // positional or -f/--file, as `groups` and `fit` take a problem file
+  sub->add_option("PROBLEM.toml,-f,--file", args->file,
                   "A problem file with the prototype value of every variable but the dependent one, and the model "
                   "values that are fixed")
       ->required();
