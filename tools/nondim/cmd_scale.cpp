@@ -160,9 +160,11 @@ void run_scale(const scale_args& args, std::ostream& out) {
     throw input_error(with_prefix((fv != nullptr ? f.at(fv->where) : f.path + ": ") + std::string(bare_message(e))));
   }
 
-  // the regimes and the compressibility the groups alone do not show, after the plan's own notes
+  // what the groups alone do not show (regimes, compressibility, a rig an order of magnitude away), after the plan's
+  // own notes
   for (auto& n : regime_change_notes(plan, a)) plan.notes.push_back(std::move(n));
   for (auto& n : compressibility_notes(plan, a)) plan.notes.push_back(std::move(n));
+  for (auto& n : far_setting_notes(plan, a)) plan.notes.push_back(std::move(n));
 
   if (args.format == "json") {
     out << plan_json(plan, a, plan.notes).dump(2) << '\n';

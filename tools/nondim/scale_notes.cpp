@@ -1,8 +1,10 @@
 #include "scale_notes.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <cstddef>
 #include <cstdio>
+#include <iterator>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -19,6 +21,13 @@ namespace {
 std::string three_digits(double x) {
   char buffer[32];
   std::snprintf(buffer, sizeof buffer, "%.3g", x);
+  return detail::tidy_exponent(buffer);
+}
+
+/// Six significant digits, as the plan's table writes values (23200 rpm, not 2.32e4 rpm).
+std::string six_digits(double x) {
+  char buffer[32];
+  std::snprintf(buffer, sizeof buffer, "%.6g", x);
   return detail::tidy_exponent(buffer);
 }
 
@@ -98,6 +107,40 @@ std::vector<std::string> compressibility_notes(const similarity_plan& plan, cons
                                 : " (the prototype's is " + three_digits(prototype_ma) + ")";
     }
     if (mach != nullptr) s += "; source: " + std::string(mach->source);
+    out.push_back(s);
+  }
+  return out;
+}
+
+std::vector<std::string> far_setting_notes(const similarity_plan& plan, const analysis& a) {
+  const dimension settings[] = {dims::velocity, dims::frequency, dims::pressure, dims::temperature};
+  std::vector<std::string> out;
+  for (std::size_t j = 0; j < plan.variables.size() && j < a.variables.size(); ++j) {
+    const variable_plan& v = plan.variables[j];
+    if (v.dependent || v.source != model_source::found || !v.ratio || !v.prototype || !v.model) continue;
+    if (std::find(std::begin(settings), std::end(settings), a.variables[j].dim) == std::end(settings)) continue;
+    const double r = *v.ratio;
+    if (!(r >= far_ratio || (r > 0.0 && r <= 1.0 / far_ratio))) continue;
+    std::string s = "the model's " + v.name + " = " + six_digits(*v.model) + " " + v.unit + " is " +
+                    (r >= 1.0 ? three_digits(r) + " times" : "1/" + three_digits(1.0 / r) + " of") +
+                    " the prototype's " + six_digits(*v.prototype) + " " + v.unit;
+    // the groups that fix this value alone: it is their only variable the model does not give
+    std::string forcing;
+    std::size_t count = 0;
+    for (std::size_t k = 0; k < plan.groups.size(); ++k) {
+      const group_plan& g = plan.groups[k];
+      if (g.holds_dependent || j >= g.exponents.size() || g.exponents[j] == 0) continue;
+      bool forces = true;
+      for (std::size_t i = 0; i < g.exponents.size() && i < plan.variables.size(); ++i)
+        if (i != j && g.exponents[i] != 0 && plan.variables[i].source != model_source::given) forces = false;
+      if (!forces) continue;
+      forcing += std::string(count++ == 0 ? "" : ", ") + "group " + std::to_string(k + 1) + " (" +
+                 (g.label.empty() ? g.text : g.label) + ")";
+    }
+    if (count > 0) s += ", forced by " + forcing + " with the model's other values given";
+    s += "; if the rig cannot reach it, give " + v.name +
+         " the model value it can reach: the plan then says which groups no longer match and how the scale-up "
+         "is affected (a distorted model)";
     out.push_back(s);
   }
   return out;

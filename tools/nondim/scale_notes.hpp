@@ -1,8 +1,10 @@
 #pragma once
 /// \file scale_notes.hpp
 /// \brief Notes on a similarity plan that need the analysis behind it: a group whose model
-/// value falls in another regime than the prototype's (the regime table), and a model speed
-/// at which a gas is compressible while the problem has no speed of sound. Notes, never errors.
+/// value falls in another regime than the prototype's (the regime table), a model speed at
+/// which a gas is compressible while the problem has no speed of sound, and a model value
+/// an order of magnitude from the prototype's with the group that forces it. Notes, never
+/// errors.
 
 #include <string>
 #include <vector>
@@ -30,5 +32,17 @@ std::vector<std::string> regime_change_notes(const similarity_plan& plan, const 
 /// 0.3 in air at the model's temperature (the first variable of dimension Theta with a
 /// model value, else 20 degC), unless the model's density is a liquid's.
 std::vector<std::string> compressibility_notes(const similarity_plan& plan, const analysis& a);
+
+/// A rig setting this many times the prototype's (or its inverse) is worth a note: an order
+/// of magnitude is where a tunnel's speed or a rig's pressure usually stops being a setting
+/// and becomes a different rig.
+inline constexpr double far_ratio = 10.0;
+
+/// \brief One sentence per rig setting the plan finds (a speed, rotational speed or
+/// frequency, pressure or temperature; not given, not the dependent) that is at least
+/// `far_ratio` times the prototype's or at most its inverse: how far, and which groups force
+/// it (independent groups whose other variables are all given on the model). Flow rates,
+/// forces and powers are left out: they follow the scale to a power and are measured, not set.
+std::vector<std::string> far_setting_notes(const similarity_plan& plan, const analysis& a);
 
 }  // namespace nondim::tool
