@@ -11,9 +11,10 @@ computed with python3-sympy (exact rationals) by the rule of DESIGN.md:
   order of the non-repeating variable.
 
 The dimensions are typed in here again from the SI Brochure (9th ed., tables 2-4) rather than
-read from the C++ header, so that a slip in one is caught by the other.  Run:
+read from the C++ header, so that a slip in one is caught by the other: textbook_agreement.py
+(ctest sympy.textbook_basis) compares both the dimensions and the bases with pi_basis, and
+random_agreement.py the bases of random problems. Run alone, it prints the bases:
   python3 tests/sympy/classical_basis.py
-and compare with the static_asserts in tests/pi_groups_test.cpp.
 """
 from functools import reduce
 from math import gcd

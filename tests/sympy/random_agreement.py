@@ -13,9 +13,7 @@ import argparse
 import importlib.util
 import os
 import random
-import subprocess
 import sys
-import tempfile
 
 from sympy import Rational
 
@@ -23,6 +21,8 @@ here = os.path.dirname(os.path.abspath(__file__))
 spec = importlib.util.spec_from_file_location("classical_basis", os.path.join(here, "classical_basis.py"))
 reference = importlib.util.module_from_spec(spec)
 spec.loader.exec_module(reference)
+sys.path.insert(0, here)
+import cxx_basis  # noqa: E402  (the C++ printer shared with textbook_agreement.py)
 
 
 def random_problem(rng):
@@ -55,42 +55,20 @@ def main():
 
     rng = random.Random(args.rng)
     problems = [random_problem(rng) for _ in range(args.count)]
-    src = [
-        "#include <nondim/solver.hpp>",
-        "#include <cstdio>",
-        "using namespace nondim;",
-        "template <class B> void show(const B& b, std::size_t n) {",
-        '  std::printf("%zu |", b.rank);',
-        '  for (std::size_t i = 0; i < b.rank; ++i) std::printf(" %zu", b.repeating[i]);',
-        '  std::printf(" |");',
-        "  for (std::size_t k = 0; k < b.group_count; ++k) {",
-        '    for (std::size_t j = 0; j < n; ++j) std::printf(" %lld", static_cast<long long>(b.exponents[k][j]));',
-        '    std::printf(" ;");',
-        "  }",
-        '  std::printf("\\n");',
-        "}",
-        "int main() {",
-    ]
+    src = cxx_basis.PREAMBLE + ["int main() {"]
     for cols in problems:
         ds = ", ".join("dimension{%s}" % ", ".join(cxx_rational(x) for x in c) for c in cols)
         src.append("  show(pi_basis<%s>(), %d);" % (ds, len(cols)))
     src.append("}")
 
-    with tempfile.TemporaryDirectory() as tmp:
-        cpp = os.path.join(tmp, "random_problems.cpp")
-        exe = os.path.join(tmp, "random_problems")
-        with open(cpp, "w") as f:
-            f.write("\n".join(src) + "\n")
-        subprocess.run([args.cxx, "-std=c++20", "-I", args.include, cpp, "-o", exe], check=True)
-        lines = subprocess.run([exe], capture_output=True, text=True, check=True).stdout.strip().split("\n")
+    lines = cxx_basis.run(src, args.cxx, [args.include], "random_problems")
 
     mismatches = 0
     dependent_repeats = 0
     for cols, line in zip(problems, lines):
         rep, groups = reference.basis(cols)
         dependent_repeats += 1 if 0 in rep else 0
-        expected = "%d |%s |%s" % (len(rep), "".join(" %d" % r for r in rep),
-                                   "".join("".join(" %d" % e for e in g) + " ;" for g in groups))
+        expected = cxx_basis.expected_line(rep, groups)
         if expected.strip() != line.strip():
             mismatches += 1
             print("mismatch for", [[str(x) for x in c] for c in cols])
