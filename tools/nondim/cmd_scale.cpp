@@ -131,6 +131,10 @@ nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a,
 }
 
 void run_scale(const scale_args& args, std::ostream& out) {
+  if (args.file.empty())
+    throw input_error(
+        with_prefix("a problem file PROBLEM.toml is required: nondim scale PROBLEM.toml (or --file "
+                    "PROBLEM.toml); see nondim scale --help"));
   problem_input in = problem_from_file(args.file);
   if (!args.dependent.empty()) override_dependent(in, args.dependent);
   if (!args.repeating.empty()) override_repeating(in, args.repeating);
@@ -182,8 +186,7 @@ subcommand add_scale(CLI::App& app) {
   // positional or -f/--file, as `groups` and `fit` take a problem file
   sub->add_option("PROBLEM.toml,-f,--file", args->file,
                   "A problem file with the prototype value of every variable but the dependent one, and the model "
-                  "values that are fixed")
-      ->required();
+                  "values that are fixed");
   sub->add_option("--format", args->format, "Output format")
       ->check(CLI::IsMember({"text", "json"}))
       ->default_str("text");
