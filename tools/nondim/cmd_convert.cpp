@@ -43,14 +43,35 @@ std::string rotation_note(const convert_args& a, double value, double result) {
          "Taken as \u03c9 = 2\u03c0n (ISO 80000-3), " +
          readable_number(value) + " " + a.from + " is " + readable_number(as_rotation) + " " + a.to + ".";
 }
+/// `convert VALUE FROM TO`, or `convert "VALUE FROM" TO` (a number and its unit in one argument, as
+/// a reading is written): the second form brought to the first. Missing units are an input error
+/// that shows both forms.
+convert_args with_units_in_place(convert_args a) {
+  if (a.to.empty()) {
+    const auto space = a.value.find_first_of(" \t");
+    const auto unit = space == std::string::npos ? std::string::npos : a.value.find_first_not_of(" \t", space);
+    if (a.from.empty() || unit == std::string::npos)
+      throw input_error(
+          with_prefix("TO is required: give the value, its unit and the unit wanted (nondim convert 14.7 psi kPa, "
+                      "or nondim convert '14.7 psi' kPa); see nondim convert --help"));
+    a.to = a.from;
+    a.from = a.value.substr(unit);
+    a.value.erase(space);
+  }
+  return a;
+}
+
 }  // namespace
 
 subcommand add_convert(CLI::App& app) {
   auto args = std::make_shared<convert_args>();
   CLI::App* sub = app.add_subcommand("convert", "Convert a value from one unit to another of the same dimension");
-  sub->add_option("VALUE", args->value, "The number to convert (negative ones too: convert -40 degC degF)")->required();
-  sub->add_option("FROM", args->from, "Its unit, e.g. psi, degC, ft/s, kg/(m*s)")->required();
-  sub->add_option("TO", args->to, "The unit wanted, of the same dimension")->required();
+  sub->add_option("VALUE", args->value,
+                  "The number to convert (negative ones too: convert -40 degC degF), or the number and its unit in "
+                  "one argument ('25 degC' degF)")
+      ->required();
+  sub->add_option("FROM", args->from, "Its unit, e.g. psi, degC, ft/s, kg/(m*s)");
+  sub->add_option("TO", args->to, "The unit wanted, of the same dimension");
   sub->add_option("--format", args->format, "Output format")
       ->check(CLI::IsMember({"text", "json"}))
       ->default_str("text");
@@ -60,39 +81,39 @@ subcommand add_convert(CLI::App& app) {
       "rpm and r/min are rotational frequency (60 rpm = 1 Hz); an angular velocity is in rad/s, and a\n"
       "conversion between the two prints a note (one revolution is 2 pi rad).\n"
       "Example: nondim convert 14.7 psi kPa");
-  return {
-      sub, [args](std::ostream& out) {
-        const double v = parse_number_arg(args->value, "VALUE");
-        const parsed_unit from = parse_unit_arg(args->from, "the unit FROM");
-        const parsed_unit to = parse_unit_arg(args->to, "the unit TO");
-        if (from.dim != to.dim)
-          throw input_error(with_prefix("cannot convert from '" + args->from + "' to '" + args->to +
-                                        "': they have different dimensions, " + dimension_error::describe(from.dim) +
-                                        " and " + dimension_error::describe(to.dim)));
-        double result = 0.0;
-        try {
-          result = convert(v, args->from, args->to);
-        } catch (const temperature_error& e) {
-          throw input_error(with_prefix("VALUE: " + std::string(bare_message(e))));
-        }
-        if (!std::isfinite(result))
-          throw input_error(with_prefix("the result of converting " + args->value + " " + args->from + " to '" +
-                                        args->to + "' is out of the range of a double"));
-        std::vector<std::string> notes;
-        if (crosses_rotational_families(args->from, args->to)) notes.push_back(rotation_note(*args, v, result));
-        if (args->format == "json") {
-          nlohmann::ordered_json j;
-          j["input"] = rounded(v);
-          j["from"] = args->from;
-          j["to"] = args->to;
-          j["value"] = rounded(result);
-          j["notes"] = notes;
-          out << j.dump(2) << '\n';
-          return;
-        }
-        out << readable_number(v) << ' ' << args->from << " = " << readable_number(result) << ' ' << args->to << '\n';
-        for (const std::string& n : notes) out << "note: " << n << '\n';
-      }};
+  return {sub, [args](std::ostream& out) {
+            const convert_args a = with_units_in_place(*args);
+            const double v = parse_number_arg(a.value, "VALUE");
+            const parsed_unit from = parse_unit_arg(a.from, "the unit FROM");
+            const parsed_unit to = parse_unit_arg(a.to, "the unit TO");
+            if (from.dim != to.dim)
+              throw input_error(with_prefix(
+                  "cannot convert from '" + a.from + "' to '" + a.to + "': they have different dimensions, " +
+                  dimension_error::describe(from.dim) + " and " + dimension_error::describe(to.dim)));
+            double result = 0.0;
+            try {
+              result = convert(v, a.from, a.to);
+            } catch (const temperature_error& e) {
+              throw input_error(with_prefix("VALUE: " + std::string(bare_message(e))));
+            }
+            if (!std::isfinite(result))
+              throw input_error(with_prefix("the result of converting " + a.value + " " + a.from + " to '" + a.to +
+                                            "' is out of the range of a double"));
+            std::vector<std::string> notes;
+            if (crosses_rotational_families(a.from, a.to)) notes.push_back(rotation_note(a, v, result));
+            if (a.format == "json") {
+              nlohmann::ordered_json j;
+              j["input"] = rounded(v);
+              j["from"] = a.from;
+              j["to"] = a.to;
+              j["value"] = rounded(result);
+              j["notes"] = notes;
+              out << j.dump(2) << '\n';
+              return;
+            }
+            out << readable_number(v) << ' ' << a.from << " = " << readable_number(result) << ' ' << a.to << '\n';
+            for (const std::string& n : notes) out << "note: " << n << '\n';
+          }};
 }
 
 }  // namespace nondim::tool
