@@ -258,7 +258,7 @@ for name, value in fit_bad.items():
 
 # exact_rank, the schema's rank check, against python3-sympy's Matrix.rank (an outside
 # reference, imported here once instead of in every case): dimension matrices of 7 rows with
-# small integer and half-integer entries, rank-deficient ones included (fixed seed), and the
+# small integer and half-integer entries, rank-deficient ones included (a fixed random.Random state), and the
 # rank-2 matrix of a heat exchanger's q, UA, C and dT (W, W/K, W/K, K: L, M, T in the fixed
 # combination L^2 M T^-3; Bergman et al., Fundamentals of Heat and Mass Transfer, 7th ed., 11.4).
 import random  # noqa: E402
