@@ -81,8 +81,7 @@ std::string group_label(const pi_group& g) {
   return {};
 }
 
-nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a,
-                                 const std::vector<std::string>& notes) {
+nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a) {
   nlohmann::ordered_json j;
   j["status"] = std::string(to_string(plan.status));
   nlohmann::ordered_json model = nlohmann::ordered_json::object();
@@ -124,7 +123,7 @@ nlohmann::ordered_json plan_json(const similarity_plan& plan, const analysis& a,
   put_measured(d, "measured", dv.model, dv.model_uncertainty);
   put_measured(d, "predicted", dv.prototype, dv.prototype_uncertainty);
   j["dependent"] = d;
-  j["notes"] = notes;
+  j["notes"] = plan.notes;
   // the configuration the regime notes keep to, only when one was chosen (as `groups` writes it)
   if (!a.configuration.empty()) j["configuration"] = a.configuration;
   return j;
@@ -171,7 +170,7 @@ void run_scale(const scale_args& args, std::ostream& out) {
   for (auto& n : far_setting_notes(plan, a)) plan.notes.push_back(std::move(n));
 
   if (args.format == "json") {
-    out << plan_json(plan, a, plan.notes).dump(2) << '\n';
+    out << plan_json(plan, a).dump(2) << '\n';
     return;
   }
   if (!f.title.empty()) out << f.title << "\n\n";

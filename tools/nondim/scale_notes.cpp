@@ -12,6 +12,7 @@
 
 #include <nondim/analysis/names/regimes.hpp>
 #include <nondim/analysis/report/detail/values.hpp>
+#include <nondim/analysis/similarity/detail/text.hpp>  // format_number: values as the plan's table writes them
 
 namespace nondim::tool {
 
@@ -21,13 +22,6 @@ namespace {
 std::string three_digits(double x) {
   char buffer[32];
   std::snprintf(buffer, sizeof buffer, "%.3g", x);
-  return detail::tidy_exponent(buffer);
-}
-
-/// Six significant digits, as the plan's table writes values (23200 rpm, not 2.32e4 rpm).
-std::string six_digits(double x) {
-  char buffer[32];
-  std::snprintf(buffer, sizeof buffer, "%.6g", x);
   return detail::tidy_exponent(buffer);
 }
 
@@ -121,9 +115,9 @@ std::vector<std::string> far_setting_notes(const similarity_plan& plan, const an
     if (std::find(std::begin(settings), std::end(settings), a.variables[j].dim) == std::end(settings)) continue;
     const double r = *v.ratio;
     if (!(r >= far_ratio || (r > 0.0 && r <= 1.0 / far_ratio))) continue;
-    std::string s = "the model's " + v.name + " = " + six_digits(*v.model) + " " + v.unit + " is " +
+    std::string s = "the model's " + v.name + " = " + detail::format_number(*v.model) + " " + v.unit + " is " +
                     (r >= 1.0 ? three_digits(r) + " times" : "1/" + three_digits(1.0 / r) + " of") +
-                    " the prototype's " + six_digits(*v.prototype) + " " + v.unit;
+                    " the prototype's " + detail::format_number(*v.prototype) + " " + v.unit;
     // the groups that fix this value alone: it is their only variable the model does not give
     std::string forcing;
     std::size_t count = 0;
